@@ -1,0 +1,63 @@
+import { Module, type DynamicModule, type Type } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { LoggerModule } from 'nestjs-pino';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { AuthModule } from './auth/auth.module';
+import { CodesModule } from './codes/codes.module';
+import { AllExceptionsFilter } from './common/filters/http-exception.filter';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { RolesGuard } from './common/guards/roles.guard';
+import { appConfig, authConfig, mailConfig, type AppConfig } from './config/configuration';
+import { validateEnv } from './config/env.validation';
+import { dataSourceOptions } from './database/data-source';
+import { HealthController } from './health/health.controller';
+import { SeedModule } from './seed/seed.module';
+import { ShopsModule } from './shops/shops.module';
+import { UsersModule } from './users/users.module';
+
+/** The built client, served at / with index.html for client routes, when it has been built. */
+function clientModules(): Array<DynamicModule | Type> {
+  const root = process.env.CLIENT_DIST ?? join(__dirname, '..', '..', 'frontend', 'dist');
+  if (!existsSync(join(root, 'index.html'))) return [];
+  return [ServeStaticModule.forRoot({ rootPath: root, exclude: ['/api/{*path}'], serveStaticOptions: { maxAge: '1h', index: false } })];
+}
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, authConfig, mailConfig], validate: validateEnv, cache: true }),
+    LoggerModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService) => ({
+        pinoHttp: {
+          level: config.get<AppConfig>('app')!.logLevel,
+          // Never log credentials.
+          redact: ['req.headers.authorization', 'req.headers.cookie'],
+          autoLogging: { ignore: (req) => !(req.url ?? '').startsWith('/api') },
+        },
+      }),
+    }),
+    TypeOrmModule.forRootAsync({
+      useFactory: () => ({ ...dataSourceOptions(), autoLoadEntities: true, migrationsRun: true }),
+    }),
+    ThrottlerModule.forRoot([{ name: 'default', ttl: 60_000, limit: () => Number(process.env.THROTTLE_LIMIT ?? 6000) }]),
+    ...clientModules(),
+    ShopsModule,
+    AuthModule,
+    UsersModule,
+    CodesModule,
+    SeedModule,
+  ],
+  controllers: [HealthController],
+  providers: [
+    { provide: APP_GUARD, useClass: ThrottlerGuard },
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+    { provide: APP_FILTER, useClass: AllExceptionsFilter },
+  ],
+})
+export class AppModule {}
