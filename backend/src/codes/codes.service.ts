@@ -92,7 +92,9 @@ export class CodesService {
     if (q.control) qb.andWhere('c.control = :control', { control: q.control });
     if (q.make) qb.andWhere("(c.make = '' OR LOWER(c.make) = :make)", { make: q.make.toLowerCase() });
     const dir = q.order === 'desc' ? 'DESC' : 'ASC';
-    qb.orderBy(`c.${q.sort}`, dir).addOrderBy('c.code', 'ASC').addOrderBy('c.make', 'ASC');
+    qb.orderBy(`c.${q.sort}`, dir);
+    if (q.sort !== 'code') qb.addOrderBy('c.code', 'ASC');
+    qb.addOrderBy('c.make', 'ASC');
     qb.skip((q.page - 1) * q.pageSize).take(q.pageSize);
     const [rows, total] = await qb.getManyAndCount();
     return { items: rows.map(toSummary), total, page: q.page, pageSize: q.pageSize };
