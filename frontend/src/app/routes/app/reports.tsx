@@ -1,0 +1,7 @@
+import { PagePlaceholder } from '@/components/page-placeholder';
+import { section } from '@/config/sections';
+
+// Placeholder until this page is built.
+export function Component() {
+  return <PagePlaceholder section={section('reports')} />;
+}
