@@ -1,4 +1,4 @@
-import { Module, type DynamicModule, type Type } from '@nestjs/common';
+import { Module, RequestMethod, type DynamicModule, type Type } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
@@ -16,6 +16,13 @@ import { appConfig, authConfig, mailConfig, type AppConfig } from './config/conf
 import { validateEnv } from './config/env.validation';
 import { dataSourceOptions } from './database/data-source';
 import { HealthController } from './health/health.controller';
+import { KnowledgeModule } from './knowledge/knowledge.module';
+import { EstimatesModule } from './estimates/estimates.module';
+import { FieldReportsModule } from './field-reports/field-reports.module';
+import { InsightsModule } from './insights/insights.module';
+import { ImportsModule } from './imports/imports.module';
+import { JobsModule } from './jobs/jobs.module';
+import { VehiclesModule } from './vehicles/vehicles.module';
 import { SeedModule } from './seed/seed.module';
 import { ShopsModule } from './shops/shops.module';
 import { UsersModule } from './users/users.module';
@@ -33,6 +40,8 @@ function clientModules(): Array<DynamicModule | Type> {
     LoggerModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService) => ({
+        // Express 5 path syntax, so Nest needs no legacy-route conversion.
+        forRoutes: [{ path: '{*path}', method: RequestMethod.ALL }],
         pinoHttp: {
           level: config.get<AppConfig>('app')!.logLevel,
           // Never log credentials.
@@ -50,6 +59,13 @@ function clientModules(): Array<DynamicModule | Type> {
     AuthModule,
     UsersModule,
     CodesModule,
+    KnowledgeModule,
+    VehiclesModule,
+    JobsModule,
+    EstimatesModule,
+    FieldReportsModule,
+    InsightsModule,
+    ImportsModule,
     SeedModule,
   ],
   controllers: [HealthController],

@@ -6,6 +6,9 @@ import { DtcCode } from '../codes/entities/dtc-code.entity';
 import { User } from '../users/entities/user.entity';
 import { CatalogueSeeder } from './catalogue.seeder';
 import { DemoAccountsSeeder } from './demo-accounts.seeder';
+import { DemoJobsSeeder } from './demo-jobs.seeder';
+import { KnowledgeSeeder } from './knowledge.seeder';
+import { FieldReportsSeeder } from './field-reports.seeder';
 
 /**
  * On first start (an empty database) loads the demo scenario unless SEED_DEMO=false.
@@ -20,6 +23,9 @@ export class SeedService implements OnApplicationBootstrap {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly accounts: DemoAccountsSeeder,
     private readonly catalogue: CatalogueSeeder,
+    private readonly knowledge: KnowledgeSeeder,
+    private readonly demoJobs: DemoJobsSeeder,
+    private readonly fieldReports: FieldReportsSeeder,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
@@ -34,7 +40,10 @@ export class SeedService implements OnApplicationBootstrap {
   async seedDemo(): Promise<void> {
     this.logger.log('Empty database: loading the invented demo scenario');
     await this.dataSource.transaction(async (em) => {
-      await this.accounts.run(em);
+      const shops = await this.accounts.run(em);
+      await this.knowledge.run(em, shops);
+      await this.demoJobs.run(em, shops);
+      await this.fieldReports.run(em);
     });
   }
 }

@@ -2,7 +2,7 @@
 
 import type { DistanceUnit, FieldError } from './auth';
 import type { CautionDto } from './codes';
-import type { FixPathDto } from './knowledge';
+import type { FixPathDto, RecordedOutcomeDto } from './knowledge';
 
 // ---------------------------------------------------------------- vehicles
 
@@ -137,13 +137,6 @@ export interface JobStepDto {
  */
 export type JobCodeState = 'open' | 'cause-found' | 'cleared' | 'exhausted';
 
-export interface CreditShare {
-  part: string;
-  label: string;
-  /** Share of one outcome, 0–1; the shares of one code sum to 1. */
-  share: number;
-}
-
 export interface JobCodeDto {
   code: string;
   /** As entered in its normal form, e.g. P0456-13 with a failure-type byte. */
@@ -167,8 +160,11 @@ export interface JobCodeDto {
   fixPath: FixPathDto | null;
   /** Why there is no fix path, when there is none. */
   fixPathNote: string | null;
-  /** After a resolved close: the parts credited with the fix and their shares ([] = a cause not listed). */
-  credits: CreditShare[] | null;
+  /**
+   * After a resolved close: the outcome recorded for this code and how it was credited (shared
+   * between parts replaced together, by their likelihoods); null when no outcome was recorded.
+   */
+  outcome: RecordedOutcomeDto | null;
   cautions: CautionDto[];
 }
 

@@ -1,0 +1,13 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditController } from './audit.controller';
+import { AuditService } from './audit.service';
+import { AuditEntry } from './entities/audit-entry.entity';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([AuditEntry])],
+  controllers: [AuditController],
+  providers: [AuditService],
+  exports: [AuditService],
+})
+export class AuditModule {}

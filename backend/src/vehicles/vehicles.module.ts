@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { Job } from '../jobs/entities/job.entity';
+import { Vehicle } from './entities/vehicle.entity';
+import { VehiclesController } from './vehicles.controller';
+import { VehiclesService } from './vehicles.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([Vehicle, Job])],
+  controllers: [VehiclesController],
+  providers: [VehiclesService],
+  exports: [VehiclesService],
+})
+export class VehiclesModule {}
