@@ -8,6 +8,7 @@ import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AuthModule } from './auth/auth.module';
+import { CacheModule } from './common/cache/cache.module';
 import { CodesModule } from './codes/codes.module';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
@@ -55,6 +56,7 @@ function clientModules(): Array<DynamicModule | Type> {
     }),
     ThrottlerModule.forRoot([{ name: 'default', ttl: 60_000, limit: () => Number(process.env.THROTTLE_LIMIT ?? 6000) }]),
     ...clientModules(),
+    CacheModule,
     ShopsModule,
     AuthModule,
     UsersModule,

@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { parse } from 'csv-parse/sync';
 import { DataSource } from 'typeorm';
 import { parseDtc, type CatalogueImportReport, type ImportProblem } from '@causeway/shared';
+import { VersionedCache } from '../common/cache/versioned-cache.service';
 import { DtcCode } from './entities/dtc-code.entity';
 import { SafetyCaution } from './entities/safety-caution.entity';
 
@@ -55,7 +56,10 @@ function hoursOf(value: string, line: number, column: string, problems: ImportPr
  */
 @Injectable()
 export class CatalogueImportService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly cache: VersionedCache,
+  ) {}
 
   async import(buffer: Buffer, dryRun: boolean): Promise<CatalogueImportReport> {
     const text = buffer.toString('utf8');
@@ -139,6 +143,7 @@ export class CatalogueImportService {
     const report: CatalogueImportReport = { dryRun, rows: rows.length, accepted: valid.length, rejected, created: 0, updated: 0, problems: problems.slice(0, 1000) };
     if (dryRun || rejected > 0) return report;
     await this.dataSource.transaction(async (em) => {
+      await this.cache.bump('knowledge', em);
       const repo = em.getRepository(DtcCode);
       for (const entry of valid) {
         const existing = await repo.findOne({ where: { code: entry.code, make: entry.make } });

@@ -26,6 +26,7 @@ import {
   type VehicleScopeQuery,
 } from '@causeway/shared';
 import { CodesService, parseCodeOr400 } from '../codes/codes.service';
+import { VersionedCache } from '../common/cache/versioned-cache.service';
 import { AddOn } from './entities/addon.entity';
 import { ExchangeRate } from './entities/exchange-rate.entity';
 import { Part } from './entities/part.entity';
@@ -99,7 +100,13 @@ export class KnowledgeService {
     @InjectRepository(PossibleCause) private readonly causeRepo: Repository<PossibleCause>,
     @InjectRepository(AddOn) private readonly addOnRepo: Repository<AddOn>,
     @InjectRepository(ExchangeRate) private readonly rateRepo: Repository<ExchangeRate>,
+    private readonly cache: VersionedCache,
   ) {}
+
+  /** Results are cached per knowledge-base version; the returned objects are shared, never mutate them. */
+  private cached<T>(kind: string, parts: unknown[], compute: () => Promise<T>): Promise<T> {
+    return this.cache.get('knowledge', `${kind}|${JSON.stringify(parts)}`, compute);
+  }
 
   listParts(): Promise<PartDto[]> {
     return this.parts.find({ order: { key: 'ASC' } }).then((rows) => rows.map(toPartDto));
@@ -121,7 +128,11 @@ export class KnowledgeService {
   }
 
   /** Ranked possible causes of a code for a vehicle, with likelihoods and costs in the shop's money. */
-  async rankCauses(code: string, vehicle: VehicleScopeQuery, money: MoneyContext): Promise<CauseRankingDto> {
+  rankCauses(code: string, vehicle: VehicleScopeQuery, money: MoneyContext): Promise<CauseRankingDto> {
+    return this.cached('rank', [code.trim().toUpperCase(), vehicle, this.moneyDto(money)], () => this.computeRankCauses(code, vehicle, money));
+  }
+
+  private async computeRankCauses(code: string, vehicle: VehicleScopeQuery, money: MoneyContext): Promise<CauseRankingDto> {
     const d = await this.detailed(code, vehicle, money);
     const causes = [...d.causes].sort((a, b) => b.probability - a.probability || a.replaceCostMinor - b.replaceCostMinor || a.key.localeCompare(b.key));
     return {
@@ -148,7 +159,12 @@ export class KnowledgeService {
    * renormalised; parts that are not possible causes of this code here are ignored and
    * reported in `notListed`.
    */
-  async planForCode(code: string, vehicle: VehicleScopeQuery, money: MoneyContext, evidence?: FixPathEvidence): Promise<FixPathDto> {
+  planForCode(code: string, vehicle: VehicleScopeQuery, money: MoneyContext, evidence?: FixPathEvidence): Promise<FixPathDto> {
+    const excluded = [...new Set(evidence?.excludedParts ?? [])].sort();
+    return this.cached('plan', [code.trim().toUpperCase(), vehicle, this.moneyDto(money), excluded], () => this.computePlan(code, vehicle, money, evidence));
+  }
+
+  private async computePlan(code: string, vehicle: VehicleScopeQuery, money: MoneyContext, evidence?: FixPathEvidence): Promise<FixPathDto> {
     const d = await this.detailed(code, vehicle, money);
     const rate = money.labourRateMinor;
     const wanted = uniq(evidence?.excludedParts ?? []);

@@ -17,6 +17,7 @@ import {
 } from '@causeway/shared';
 import { appConfig, type AppConfig } from '../config/configuration';
 import { parseCodeOr400 } from '../codes/codes.service';
+import { VersionedCache } from '../common/cache/versioned-cache.service';
 import { validationFailed } from '../common/validation';
 import { knowledgeConfig, type KnowledgeConfig } from './knowledge.config';
 import { Outcome } from './entities/outcome.entity';
@@ -74,6 +75,7 @@ export class LikelihoodService {
     @InjectDataSource() private readonly dataSource: DataSource,
     @Inject(appConfig.KEY) private readonly app: AppConfig,
     @Inject(knowledgeConfig.KEY) private readonly config: KnowledgeConfig,
+    private readonly cache: VersionedCache,
   ) {}
 
   get priorStrength(): number {
@@ -147,6 +149,8 @@ export class LikelihoodService {
     if (issues.length) throw validationFailed(issues);
 
     const repo = em.getRepository(Outcome);
+    // Cached likelihoods and fix paths are stale from this transaction on.
+    await this.cache.bump('knowledge', em);
     if (input.sourceId !== null) await repo.delete({ source: input.source, sourceId: input.sourceId, code });
 
     const vehicle = normaliseVehicle(input.vehicle);
