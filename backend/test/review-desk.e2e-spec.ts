@@ -188,6 +188,28 @@ describe('review desk (e2e)', () => {
     expect(await outcomesOf(report.id)).toHaveLength(1);
   });
 
+  it('a burst of confirmed fixes from one contributor is held to the influence cap', async () => {
+    // product.md §2: one user can move a likelihood only so far. With the default cap of 3 outcomes
+    // per user (INFLUENCE_CAP_USER unset) a fourth fix by the same contributor adds nothing more.
+    const CAP_USER = 3;
+    const base = await ranking('P0303', STRAND);
+    const coil = base.causes.find((c) => c.key === 'ignition-coil')!;
+    expect(coil.evidence).toBeCloseTo(1, 12); // the demo report approved above
+    const alpha = base.priorStrength;
+    for (let i = 0; i < 3; i++) {
+      const report = await fileFix({ code: 'P0303', ...STRAND, part: 'ignition-coil', notes: `Another Strand, coil ${i + 1}` });
+      const view = await detail(report.id);
+      expect(view.diff.likelihoods!.capped).toBe(i === 2);
+      await t.http().post(`/api/review/reports/${report.id}/approve`).set(...bearer(moderator)).send({}).expect(200);
+    }
+    const after = await ranking('P0303', STRAND);
+    expect(after.capped).toBe(true);
+    const got = after.causes.find((c) => c.key === 'ignition-coil')!;
+    // Four outcomes of weight 1 scaled to a total of 3: p = (α·w + 3)/(α + 3).
+    expect(got.evidence).toBeCloseTo(CAP_USER, 12);
+    expect(got.probability).toBeCloseTo((alpha * coil.priorWeight + CAP_USER) / (alpha + CAP_USER), 12);
+  });
+
   it('rejecting moves nothing, needs a reason, and tells the author why', async () => {
     const report = await fileFix({ code: 'P0456', ...TARN, part: 'vent-valve', triedFirst: ['fuel-cap'], notes: 'Bench test failed' });
     const before = await ranking('P0456', TARN);

@@ -5,6 +5,7 @@ import type { AuditEntryDto, Page } from '@causeway/shared';
 import type { AuthUser } from '../auth/auth-user';
 import type { AuditQuery } from './dto/audit-query.dto';
 import { AuditEntry } from './entities/audit-entry.entity';
+import { VersionedCache } from '../common/cache/versioned-cache.service';
 
 /** Who made a change; `null` id for the system itself (seeding, imports). */
 export type AuditActor = Pick<AuthUser, 'id' | 'email'> | { id: null; email: string };
@@ -52,9 +53,17 @@ function upperBound(to: string): Date {
  */
 @Injectable()
 export class AuditService {
-  constructor(@InjectRepository(AuditEntry) private readonly entries: Repository<AuditEntry>) {}
+  constructor(
+    @InjectRepository(AuditEntry) private readonly entries: Repository<AuditEntry>,
+    private readonly cache: VersionedCache,
+  ) {}
 
+  /**
+   * Every audited change is a change to the knowledge base or to what it learned from, so
+   * it also marks cached likelihoods and fix paths stale, in the same transaction.
+   */
   async record(em: EntityManager, actor: AuditActor, entry: AuditRecord): Promise<AuditEntry> {
+    await this.cache.bump('knowledge', em);
     const repo = em.getRepository(AuditEntry);
     return repo.save(
       repo.create({

@@ -32,14 +32,12 @@ import { ImportMappingEntity } from './entities/import-mapping.entity';
 import { importLimits } from './import-limits';
 import { RowChecker, type NormalRow } from './rows';
 import { ImportTransactions } from './transaction';
-import { WRITTEN_COLUMNS, writeRows, type SqlOp, type WriteResult } from './writer';
+import { WRITTEN_COLUMNS, dbTime, writeRows, type SqlOp, type WriteResult } from './writer';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const FIELD_LABELS: Record<ImportField, string> = {
   date: 'date', time: 'time', vin: 'VIN', odometer: 'odometer', odometerUnit: 'odometer unit', module: 'module', code: 'code', status: 'status', description: 'description', make: 'make', model: 'model', year: 'year', engine: 'engine', plate: 'plate',
 };
-/** Rows checked between two yields to the event loop, so that progress polls are answered. */
-const ROWS_PER_YIELD = 2000;
 const PROGRESS_EVERY_MS = 200;
 
 function fileError(problem: FileProblem): BadRequestException | PayloadTooLargeException {
@@ -153,11 +151,16 @@ export class ImportsService implements OnModuleInit {
     const records = readRecords(buf, shape.offset, layout.delimiter, layout.lineEnding);
     let importRow: CsvImport | null = null;
     try {
-      // Header: the first line that is not blank.
+      // Header: the first line that is not blank; the rest of its batch are data rows.
       let header: CsvRecord | null = null;
+      let pending: CsvRecord[] = [];
+      let bytes = 0;
       for (let n = await records.next(); !n.done; n = await records.next()) {
-        if (!isBlank(n.value.cells)) {
-          header = n.value;
+        const i = n.value.records.findIndex((r) => !isBlank(r.cells));
+        if (i !== -1) {
+          header = n.value.records[i];
+          pending = n.value.records.slice(i + 1);
+          bytes = n.value.bytes;
           break;
         }
       }
@@ -183,22 +186,25 @@ export class ImportsService implements OnModuleInit {
       const T0 = Date.now();
       const valid: NormalRow[] = [];
       let rows = 0;
-      let sinceYield = 0;
       let lastProgress = Date.now();
+      const take = (batch: CsvRecord[]) => {
+        for (const rec of batch) {
+          if (isBlank(rec.cells)) continue;
+          rows += 1;
+          if (rows > limits.maxRows) throw new FileProblem(`has more than ${limits.maxRows.toLocaleString('en-GB')} data rows, the limit for one import; split it into smaller files`);
+          const row = checker.check(rec.line, rec.cells);
+          if (row) valid.push(row);
+        }
+      };
+      take(pending);
       for (let n = await records.next(); !n.done; n = await records.next()) {
-        const rec = n.value;
-        if (isBlank(rec.cells)) continue;
-        rows += 1;
-        if (rows > limits.maxRows) throw new FileProblem(`has more than ${limits.maxRows.toLocaleString('en-GB')} data rows, the limit for one import; split it into smaller files`);
-        const row = checker.check(rec.line, rec.cells);
-        if (row) valid.push(row);
-        if (++sinceYield >= ROWS_PER_YIELD) {
-          sinceYield = 0;
-          await yieldToEventLoop();
-          if (importRow && Date.now() - lastProgress >= PROGRESS_EVERY_MS) {
-            lastProgress = Date.now();
-            await this.imports.update({ id: importRow.id }, { bytesProcessed: rec.bytes, rowsProcessed: rows });
-          }
+        take(n.value.records);
+        bytes = n.value.bytes;
+        // Let other requests (progress polls among them) in between batches.
+        await yieldToEventLoop();
+        if (importRow && Date.now() - lastProgress >= PROGRESS_EVERY_MS) {
+          lastProgress = Date.now();
+          await this.imports.update({ id: importRow.id }, { bytesProcessed: bytes, rowsProcessed: rows });
         }
       }
       if (rows === 0) throw new FileProblem('has a header line but no data rows');
@@ -233,7 +239,7 @@ export class ImportsService implements OnModuleInit {
         Object.assign(report, counts);
         for (const p of report.preview) p.duplicate = duplicateLines.includes(p.line);
       };
-      const ctx = { shopId: shop.id, userId: user.id, fileName: report.fileName, now: new Date(now), previewLines: new Set(checker.preview.map((p) => p.line)) };
+      const ctx = { shopId: shop.id, userId: user.id, fileName: report.fileName, now: dbTime(now), previewLines: new Set(checker.preview.map((p) => p.line)) };
       const modelYearOf = (vin: string) => validateVin(vin, { referenceYear: new Date(now).getUTCFullYear() }).modelYear;
 
       if (q.dryRun) {
@@ -242,7 +248,7 @@ export class ImportsService implements OnModuleInit {
         const placeholder: SqlOp = {
           kind: 'run',
           sql: 'INSERT INTO "imports" ("id", "shopId", "fileName", "fileBytes", "status", "validOnly", "phase") VALUES (?, ?, ?, ?, \'running\', ?, \'writing\')',
-          params: [importId, shop.id, report.fileName, buf.length, q.validOnly],
+          params: [importId, shop.id, report.fileName, buf.length, q.validOnly ? 1 : 0],
         };
         fill(await this.tx.run(writeRows({ ...ctx, importId }, valid, modelYearOf), () => [], true, [placeholder]));
         return report;
@@ -266,7 +272,7 @@ export class ImportsService implements OnModuleInit {
             {
               kind: 'run',
               sql: 'UPDATE "imports" SET "status" = \'committed\', "phase" = \'done\', "rows" = ?, "accepted" = ?, "rejected" = ?, "skippedDuplicates" = ?, "createdVehicles" = ?, "updatedVehicles" = ?, "createdJobs" = ?, "createdCodes" = ?, "report" = ?, "finishedAt" = ? WHERE "id" = ?',
-              params: [c.rows, c.accepted, c.rejected, c.skippedDuplicates, c.createdVehicles, c.updatedVehicles, c.createdJobs, c.createdCodes, JSON.stringify(report), new Date(), id],
+              params: [c.rows, c.accepted, c.rejected, c.skippedDuplicates, c.createdVehicles, c.updatedVehicles, c.createdJobs, c.createdCodes, JSON.stringify(report), dbTime(Date.now()), id],
             },
           ];
         },

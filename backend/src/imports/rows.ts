@@ -1,4 +1,4 @@
-import { createHash } from 'node:crypto';
+import { hash as digest } from 'node:crypto';
 import {
   parseDtc,
   toKm,
@@ -31,6 +31,8 @@ export interface NormalRow {
   status: CodeStatus;
   description: string | null;
   freezeFrame: FreezeFrame;
+  /** The freeze frame as stored: JSON with the keys in a fixed order. */
+  freezeFrameJson: string;
   make: string | null;
   model: string | null;
   engine: string | null;
@@ -76,6 +78,9 @@ export class RowChecker {
   private readonly vinReported = new Set<string>();
   private readonly dateCache = new Map<string, Parsed<ScanTime>>();
   private readonly statusCache = new Map<string, Parsed<CodeStatus>>();
+  private readonly odometerCache = new Map<string, ReturnType<typeof parseOdometer>>();
+  /** Freeze-frame columns in key order, so that equal frames give equal JSON (and hashes). */
+  private readonly freezeColumns: Array<{ index: number; key: string; header: string }>;
 
   constructor(
     private readonly opts: RowCheckerOptions,
@@ -85,6 +90,7 @@ export class RowChecker {
     this.index = opts.resolved.index;
     this.header = opts.resolved.header;
     this.order = opts.mapping.dateOrder ?? (opts.locale.toLowerCase() === 'en-us' ? 'MDY' : 'DMY');
+    this.freezeColumns = [...opts.resolved.freezeFrame].sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
   }
 
   private problem(line: number, column: string, message: string, severity: 'error' | 'warning' = 'error'): void {
@@ -199,7 +205,11 @@ export class RowChecker {
     let odometerKm: number | null = null;
     const rawOdo = this.cell(cells, 'odometer');
     if (rawOdo !== '') {
-      const parsed = parseOdometer(rawOdo);
+      let parsed = this.odometerCache.get(rawOdo);
+      if (!parsed) {
+        parsed = parseOdometer(rawOdo);
+        if (this.odometerCache.size < 50_000) this.odometerCache.set(rawOdo, parsed);
+      }
       if (!parsed.ok) {
         err('odometer', parsed.message);
       } else {
@@ -245,7 +255,7 @@ export class RowChecker {
 
     // Freeze frame
     const freezeFrame: FreezeFrame = {};
-    for (const ff of this.opts.resolved.freezeFrame) {
+    for (const ff of this.freezeColumns) {
       const v = (cells[ff.index] ?? '').trim();
       if (v === '') continue;
       if (v.length > FREEZE_VALUE_MAX) err('freezeFrame', `is longer than ${FREEZE_VALUE_MAX} characters`, ff.header);
@@ -275,12 +285,8 @@ export class RowChecker {
       if (this.problemsTotal === before) this.problem(line, 'row', 'could not be read');
       return null;
     }
-    const ffKeys = Object.keys(freezeFrame).sort();
-    const ffJson = JSON.stringify(ffKeys.map((k) => [k, freezeFrame[k]]));
-    const scannedIso = new Date(scan!.instant).toISOString();
-    const hash = createHash('sha256')
-      .update(`${vin}\u0001${scannedIso}\u0001${display}\u0001${status}\u0001${odometerKm ?? ''}\u0001${module ?? ''}\u0001${description ?? ''}\u0001${ffJson}`)
-      .digest('base64url');
+    const freezeFrameJson = JSON.stringify(freezeFrame);
+    const hash = digest('sha256', `${vin}\u0001${scan!.instant}\u0001${display}\u0001${status}\u0001${odometerKm ?? ''}\u0001${module ?? ''}\u0001${description ?? ''}\u0001${freezeFrameJson}`, 'base64url');
     return {
       line,
       vin: vin!,
@@ -293,6 +299,7 @@ export class RowChecker {
       status: status!,
       description,
       freezeFrame,
+      freezeFrameJson,
       make,
       model,
       engine,

@@ -13,18 +13,6 @@ interface SqliteHandle {
   readonly inTransaction: boolean;
 }
 
-/** TypeORM's own text form of a date on SQLite (DateUtils.mixedDateToUtcDatetimeString). */
-function sqliteDate(d: Date): string {
-  return d.toISOString().replace('T', ' ').replace('Z', '');
-}
-
-function sqliteParam(v: unknown): unknown {
-  if (v === undefined) return null;
-  if (v instanceof Date) return sqliteDate(v);
-  if (typeof v === 'boolean') return v ? 1 : 0;
-  return v;
-}
-
 function pgSql(sql: string): string {
   let n = 0;
   return sql.replace(/\?/g, () => `$${++n}`);
@@ -61,10 +49,9 @@ export class ImportTransactions {
 
   private execSqlite(op: SqlOp): unknown {
     const s = this.stmt(op.sql);
-    const params = op.params.map(sqliteParam);
-    if (op.kind === 'get') return s.get(...params);
-    if (op.kind === 'all') return s.all(...params);
-    s.run(...params);
+    if (op.kind === 'get') return s.get(op.params);
+    if (op.kind === 'all') return s.all(op.params);
+    s.run(op.params);
     return undefined;
   }
 

@@ -7,20 +7,22 @@ import { uuid7 } from './uuid7';
  * the embedded SQLite (prepared statements, one transaction that nothing else can interleave with)
  * and asynchronously on PostgreSQL. Identifiers are double-quoted and parameters are `?`.
  */
-export type SqlOp = { kind: 'get' | 'all' | 'run'; sql: string; params: unknown[] };
+export type SqlOp = { kind: 'get' | 'all' | 'run'; sql: string; params: Array<string | number | null> };
 export type Row = Record<string, unknown>;
 export type WriteProgram<T> = Generator<SqlOp, T, unknown>;
 
-const get = (sql: string, ...params: unknown[]): SqlOp => ({ kind: 'get', sql, params });
-const all = (sql: string, ...params: unknown[]): SqlOp => ({ kind: 'all', sql, params });
-const run = (sql: string, ...params: unknown[]): SqlOp => ({ kind: 'run', sql, params });
+type Param = string | number | null;
+const get = (sql: string, ...params: Param[]): SqlOp => ({ kind: 'get', sql, params });
+const all = (sql: string, ...params: Param[]): SqlOp => ({ kind: 'all', sql, params });
+const run = (sql: string, ...params: Param[]): SqlOp => ({ kind: 'run', sql, params });
 
 export interface WriteContext {
   shopId: string;
   userId: string;
   importId: string;
   fileName: string;
-  now: Date;
+  /** In the database's text form (see `dbTime`). */
+  now: string;
   /** Lines whose duplicate state the preview shows. */
   previewLines: Set<number>;
 }
@@ -34,13 +36,21 @@ export interface WriteResult {
   duplicateLines: number[];
 }
 
+/**
+ * An instant in the text form TypeORM writes on SQLite (DateUtils.mixedDateToUtcDatetimeString:
+ * UTC 'YYYY-MM-DD HH:mm:ss.SSS'), which PostgreSQL also reads for a timestamp. Parameters of the
+ * write program are only strings, numbers and null, so that no conversion runs per statement.
+ */
+export function dbTime(ms: number | Date): string {
+  return new Date(ms).toISOString().replace('T', ' ').replace('Z', '');
+}
+
 const STATUS_RANK: Record<CodeStatus, number> = { pending: 0, stored: 1, permanent: 2 };
 
 const SQL = {
-  seen: 'SELECT 1 AS "x" FROM "import_rows" WHERE "shopId" = ? AND "hash" = ?',
   vehicle: 'SELECT "id", "odometerKm" FROM "vehicles" WHERE "shopId" = ? AND "vin" = ?',
   insertVehicle:
-    'INSERT INTO "vehicles" ("id", "shopId", "vin", "make", "model", "engine", "year", "plate", "createdAt", "updatedAt") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+    'INSERT INTO "vehicles" ("id", "shopId", "vin", "make", "model", "engine", "year", "plate", "odometerKm", "odometerReadAt", "createdAt", "updatedAt") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
   updateOdometer: 'UPDATE "vehicles" SET "odometerKm" = ?, "odometerReadAt" = ?, "updatedAt" = ? WHERE "id" = ?',
   importedJob:
     'SELECT i."jobId" AS "jobId" FROM "import_jobs" i JOIN "jobs" j ON j."id" = i."jobId" WHERE i."shopId" = ? AND i."vehicleId" = ? AND i."scanDay" = ? AND j."status" = \'open\' ORDER BY j."openedAt" DESC LIMIT 1',
@@ -51,8 +61,9 @@ const SQL = {
   insertCode: 'INSERT INTO "job_codes" ("id", "jobId", "code", "display", "position", "status", "freezeFrame") VALUES (?, ?, ?, ?, ?, ?, ?)',
   updateCode: 'UPDATE "job_codes" SET "status" = ?, "freezeFrame" = ? WHERE "id" = ?',
   touchJob: 'UPDATE "jobs" SET "updatedAt" = ? WHERE "id" = ?',
+  // Inserted first: no row comes back when the shop already has the hash (a duplicate).
   insertRow:
-    'INSERT INTO "import_rows" ("shopId", "importId", "hash", "line", "vehicleId", "jobId", "scanDay", "code", "module") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)',
+    'INSERT INTO "import_rows" ("shopId", "importId", "hash", "line", "vehicleId", "jobId", "scanDay", "code", "module") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT ("shopId", "vehicleId", "hash") DO NOTHING RETURNING "line"',
 };
 
 /**
@@ -67,7 +78,10 @@ export const WRITTEN_COLUMNS = {
 
 interface VehicleState {
   id: string;
+  /** New to the shop (its id chosen here). */
   created: boolean;
+  /** Written: a new vehicle is written with its first new row, so that all-duplicate files create nothing. */
+  inserted: boolean;
   odometerKm: number | null;
   /** The highest reading among the new rows, and when it was read. */
   newKm: number | null;
@@ -84,18 +98,23 @@ interface CodeState {
 interface JobState {
   id: string;
   created: boolean;
+  inserted: boolean;
   nextPosition: number;
   codes: Map<string, CodeState>;
 }
 
 /** Per VIN and per vehicle-day: what the new vehicle or job starts with. */
 function firstPass(rows: NormalRow[]) {
-  const vins = new Map<string, { make: string | null; model: string | null; engine: string | null; year: number | null; plate: string | null }>();
+  const vins = new Map<string, { make: string | null; model: string | null; engine: string | null; year: number | null; plate: string | null; km: number | null; kmAt: number }>();
   const days = new Map<string, { openedAt: number; odometerKm: number | null }>();
   for (const r of rows) {
     const v = vins.get(r.vin);
-    if (!v) vins.set(r.vin, { make: r.make, model: r.model, engine: r.engine, year: r.year, plate: r.plate });
+    if (!v) vins.set(r.vin, { make: r.make, model: r.model, engine: r.engine, year: r.year, plate: r.plate, km: r.odometerKm, kmAt: r.scannedAt });
     else {
+      if (r.odometerKm !== null && (v.km === null || r.odometerKm > v.km)) {
+        v.km = r.odometerKm;
+        v.kmAt = r.scannedAt;
+      }
       v.make ??= r.make;
       v.model ??= r.model;
       v.engine ??= r.engine;
@@ -128,7 +147,7 @@ export function* writeRows(ctx: WriteContext, rows: NormalRow[], modelYearOf: (v
   const now = ctx.now;
 
   for (const r of rows) {
-    if (seen.has(r.hash) || (yield get(SQL.seen, ctx.shopId, r.hash))) {
+    if (seen.has(r.hash)) {
       result.skippedDuplicates += 1;
       if (ctx.previewLines.has(r.line)) result.duplicateLines.push(r.line);
       continue;
@@ -138,41 +157,52 @@ export function* writeRows(ctx: WriteContext, rows: NormalRow[], modelYearOf: (v
     let vehicle = vehicles.get(r.vin);
     if (!vehicle) {
       const found = (yield get(SQL.vehicle, ctx.shopId, r.vin)) as Row | undefined;
-      if (found) {
-        vehicle = { id: String(found.id), created: false, odometerKm: found.odometerKm === null ? null : Number(found.odometerKm), newKm: null, newKmAt: 0 };
-      } else {
-        const info = vins.get(r.vin)!;
-        vehicle = { id: uuid7(), created: true, odometerKm: null, newKm: null, newKmAt: 0 };
-        yield run(SQL.insertVehicle, vehicle.id, ctx.shopId, r.vin, info.make ?? '', info.model ?? '', info.engine, info.year ?? modelYearOf(r.vin), info.plate, now, now);
-        result.createdVehicles += 1;
-      }
+      vehicle = found
+        ? { id: String(found.id), created: false, inserted: true, odometerKm: found.odometerKm === null ? null : Number(found.odometerKm), newKm: null, newKmAt: 0 }
+        : { id: uuid7(), created: true, inserted: false, odometerKm: null, newKm: null, newKmAt: 0 };
       vehicles.set(r.vin, vehicle);
     }
-    if (r.odometerKm !== null && (vehicle.newKm === null || r.odometerKm > vehicle.newKm)) {
-      vehicle.newKm = r.odometerKm;
-      vehicle.newKmAt = r.scannedAt;
-    }
-
     const dayKey = `${r.vin}|${r.scanDay}`;
     let job = jobs.get(dayKey);
     if (!job) {
       const existing = vehicle.created ? undefined : ((yield get(SQL.importedJob, ctx.shopId, vehicle.id, r.scanDay)) as Row | undefined);
       if (existing) {
-        const codes = (yield all(SQL.jobCodes, existing.jobId)) as Row[];
-        job = { id: String(existing.jobId), created: false, nextPosition: 0, codes: new Map() };
+        const codes = (yield all(SQL.jobCodes, String(existing.jobId))) as Row[];
+        job = { id: String(existing.jobId), created: false, inserted: true, nextPosition: 0, codes: new Map() };
         for (const c of codes) {
           job.codes.set(String(c.code), { id: String(c.id), status: c.status as CodeStatus, freezeFrame: parseJson(c.freezeFrame), dirty: false });
           job.nextPosition = Math.max(job.nextPosition, Number(c.position) + 1);
         }
       } else {
-        const day = days.get(dayKey)!;
-        job = { id: uuid7(), created: true, nextPosition: 0, codes: new Map() };
-        const complaint = `Codes read with a scan tool on ${r.scanDay}, imported from "${ctx.fileName}".`;
-        yield run(SQL.insertJob, job.id, ctx.shopId, vehicle.id, complaint, ctx.userId, day.odometerKm, new Date(day.openedAt), ctx.userId, now, now);
-        yield run(SQL.insertImportJob, job.id, ctx.shopId, vehicle.id, r.scanDay, ctx.importId);
-        result.createdJobs += 1;
+        job = { id: uuid7(), created: true, inserted: false, nextPosition: 0, codes: new Map() };
       }
       jobs.set(dayKey, job);
+    }
+
+    if (!(yield get(SQL.insertRow, ctx.shopId, ctx.importId, r.hash, r.line, vehicle.id, job.id, r.scanDay, r.display, r.module))) {
+      result.skippedDuplicates += 1;
+      if (ctx.previewLines.has(r.line)) result.duplicateLines.push(r.line);
+      continue;
+    }
+    if (!vehicle.inserted) {
+      const info = vins.get(r.vin)!;
+      // Written with the highest reading of its rows in the file, so the odometer needs no update after.
+      yield run(SQL.insertVehicle, vehicle.id, ctx.shopId, r.vin, info.make ?? '', info.model ?? '', info.engine, info.year ?? modelYearOf(r.vin), info.plate, info.km, info.km === null ? null : dbTime(info.kmAt), now, now);
+      vehicle.inserted = true;
+      vehicle.odometerKm = info.km;
+      result.createdVehicles += 1;
+    }
+    if (r.odometerKm !== null && (vehicle.newKm === null || r.odometerKm > vehicle.newKm)) {
+      vehicle.newKm = r.odometerKm;
+      vehicle.newKmAt = r.scannedAt;
+    }
+    if (!job.inserted) {
+      const day = days.get(dayKey)!;
+      const complaint = `Codes read with a scan tool on ${r.scanDay}, imported from "${ctx.fileName}".`;
+      yield run(SQL.insertJob, job.id, ctx.shopId, vehicle.id, complaint, ctx.userId, day.odometerKm, dbTime(day.openedAt), ctx.userId, now, now);
+      yield run(SQL.insertImportJob, job.id, ctx.shopId, vehicle.id, r.scanDay, ctx.importId);
+      job.inserted = true;
+      result.createdJobs += 1;
     }
 
     const code = job.codes.get(r.code);
@@ -190,17 +220,16 @@ export function* writeRows(ctx: WriteContext, rows: NormalRow[], modelYearOf: (v
       }
     } else {
       const id = uuid7();
-      yield run(SQL.insertCode, id, job.id, r.code, r.display, job.nextPosition, r.status, JSON.stringify(r.freezeFrame));
+      yield run(SQL.insertCode, id, job.id, r.code, r.display, job.nextPosition, r.status, r.freezeFrameJson);
       job.nextPosition += 1;
       job.codes.set(r.code, { id, status: r.status, freezeFrame: { ...r.freezeFrame }, dirty: false });
       result.createdCodes += 1;
     }
-    yield run(SQL.insertRow, ctx.shopId, ctx.importId, r.hash, r.line, vehicle.id, job.id, r.scanDay, r.display, r.module);
   }
 
   for (const v of vehicles.values()) {
-    if (v.newKm === null || (v.odometerKm !== null && v.newKm <= v.odometerKm)) continue;
-    yield run(SQL.updateOdometer, v.newKm, new Date(v.newKmAt), now, v.id);
+    if (!v.inserted || v.newKm === null || (v.odometerKm !== null && v.newKm <= v.odometerKm)) continue;
+    yield run(SQL.updateOdometer, v.newKm, dbTime(v.newKmAt), now, v.id);
     if (!v.created) result.updatedVehicles += 1;
   }
   for (const job of jobs.values()) {

@@ -7,46 +7,64 @@ export interface CsvRecord {
   /** 1-based line where the record starts. */
   line: number;
   cells: string[];
-  /** Bytes of the file read so far. */
+}
+
+export interface CsvBatch {
+  records: CsvRecord[];
+  /** Bytes of the file handed to the parser so far (progress). */
   bytes: number;
 }
 
 const CHUNK_BYTES = 256 * 1024;
+const BATCH = 1000;
 /** Longest record accepted; beyond it the file is not a scan export (or a quote was never closed). */
 const MAX_RECORD_CHARS = 1_000_000;
 
-function* chunks(buf: Buffer, offset: number): Generator<Buffer> {
-  for (let i = offset; i < buf.length; i += CHUNK_BYTES) yield buf.subarray(i, Math.min(i + CHUNK_BYTES, buf.length));
+function countBreaks(cell: string, br: string): number {
+  let n = 0;
+  for (let p = cell.indexOf(br); p !== -1; p = cell.indexOf(br, p + 1)) n += 1;
+  return n;
 }
 
 /**
- * Streams the records of an uploaded file through csv-parse, chunk by chunk from the buffer
- * (the file is never decoded into one string). Line numbers are counted from the bytes consumed,
- * so a quoted field with embedded newlines keeps the number of the line where its record starts.
+ * Streams the records of an uploaded file through csv-parse, chunk by chunk from the buffer (the
+ * file is never decoded into one string), in batches. Line numbers: each record takes one line
+ * plus the line breaks inside its quoted fields, so a record keeps the number of the line where
+ * it starts. Blank lines come through as records of one empty cell (and count as lines).
  */
-export async function* readRecords(buf: Buffer, offset: number, delimiter: string, lineEnding: ImportDetected['lineEnding']): AsyncGenerator<CsvRecord> {
+export async function* readRecords(buf: Buffer, offset: number, delimiter: string, lineEnding: ImportDetected['lineEnding']): AsyncGenerator<CsvBatch> {
   const parser: Parser = parse({
     delimiter,
     bom: false,
-    info: true,
     relax_column_count: true,
     relax_quotes: true,
     skip_empty_lines: false,
     max_record_size: MAX_RECORD_CHARS,
   });
-  const source = Readable.from(chunks(buf, offset), { objectMode: false });
-  source.pipe(parser);
-  const breakByte = lineEnding === 'cr' ? 0x0d : 0x0a;
-  let line = 1;
-  let consumed = 0;
-  try {
-    for await (const out of parser as AsyncIterable<{ record: string[]; info: { bytes: number } }>) {
-      const start = line;
-      const end = offset + out.info.bytes;
-      for (let p = buf.indexOf(breakByte, offset + consumed); p !== -1 && p < end; p = buf.indexOf(breakByte, p + 1)) line += 1;
-      consumed = out.info.bytes;
-      yield { line: start, cells: out.record, bytes: end };
+  let fed = offset;
+  function* chunks(): Generator<Buffer> {
+    for (let i = offset; i < buf.length; i += CHUNK_BYTES) {
+      const end = Math.min(i + CHUNK_BYTES, buf.length);
+      fed = end;
+      yield buf.subarray(i, end);
     }
+  }
+  const source = Readable.from(chunks(), { objectMode: false });
+  source.pipe(parser);
+  const br = lineEnding === 'cr' ? '\r' : '\n';
+  let line = 1;
+  let batch: CsvRecord[] = [];
+  try {
+    for await (const cells of parser as AsyncIterable<string[]>) {
+      batch.push({ line, cells });
+      line += 1;
+      for (const cell of cells) if (cell.length > 1) line += countBreaks(cell, br);
+      if (batch.length >= BATCH) {
+        yield { records: batch, bytes: fed };
+        batch = [];
+      }
+    }
+    if (batch.length) yield { records: batch, bytes: fed };
   } catch (err) {
     if (err instanceof FileProblem) throw err;
     const e = err as { code?: string; message?: string };

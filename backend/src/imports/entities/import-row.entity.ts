@@ -1,32 +1,28 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, PrimaryColumn } from 'typeorm';
 
 /**
- * One imported reading (a code of a vehicle at a scan date). Written by the import's prepared
- * statements; the entity is here for reads and for the schema's description.
+ * One imported reading (a code of a vehicle at a scan date), keyed by the shop, the vehicle and the
+ * sha256 of its normalised values. Written by the import's prepared statements; the entity describes the
+ * schema and serves reads.
  */
-@Entity('import_rows')
-@Index('IDX_import_rows_shop_hash', ['shopId', 'hash'], { unique: true })
-@Index('IDX_import_rows_vehicle_day', ['shopId', 'vehicleId', 'scanDay'])
-@Index('IDX_import_rows_import', ['importId'])
+@Entity('import_rows', { withoutRowid: true })
 export class ImportRow {
-  @PrimaryGeneratedColumn('increment')
-  id: number;
-
-  @Column()
+  @PrimaryColumn()
   shopId: string;
+
+  /** The vehicle of the VIN; a deleted vehicle's rows are imported again for the new one. */
+  @PrimaryColumn()
+  vehicleId: string;
+
+  /** sha256 (base64url) of the row's normalised values. */
+  @PrimaryColumn({ length: 43 })
+  hash: string;
 
   @Column()
   importId: string;
 
-  /** sha256 (base64url) of the row's normalised values. */
-  @Column({ length: 43 })
-  hash: string;
-
   @Column('integer')
   line: number;
-
-  @Column({ type: 'varchar', nullable: true })
-  vehicleId: string | null;
 
   @Column({ type: 'varchar', nullable: true })
   jobId: string | null;
