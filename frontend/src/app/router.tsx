@@ -54,6 +54,20 @@ export function createAppRoutes(): RouteObject[] {
       ErrorBoundary: RouteError,
     },
     {
+      // Signed in, but printable: no navigation around it.
+      path: '/jobs/:id/estimate/print',
+      lazy: () => import('./routes/estimate-print'),
+      HydrateFallback: PageLoader,
+      ErrorBoundary: RouteError,
+    },
+    {
+      // The vehicle owner's page: no account, outside the signed-in app.
+      path: '/estimate/:token',
+      lazy: () => import('./routes/public-estimate'),
+      HydrateFallback: PageLoader,
+      ErrorBoundary: RouteError,
+    },
+    {
       path: paths.home,
       lazy: () => import('./routes/app/root'),
       HydrateFallback: PageLoader,
@@ -64,12 +78,17 @@ export function createAppRoutes(): RouteObject[] {
           children: [
             { index: true, lazy: () => import('./routes/app/home') },
             { path: 'codes', lazy: () => import('./routes/app/codes') },
-            { path: 'codes/:code', lazy: () => import('./routes/app/codes') },
+            { path: 'codes/:code', lazy: () => import('./routes/app/code') },
             { path: 'jobs', lazy: () => import('./routes/app/jobs') },
+            { path: 'jobs/:id', lazy: () => import('./routes/app/job') },
             { path: 'vehicles', lazy: () => import('./routes/app/vehicles') },
+            { path: 'vehicles/:id', lazy: () => import('./routes/app/vehicle') },
             guarded('imports', 'imports', () => import('./routes/app/imports')),
+            guarded('imports', 'imports/:id', () => import('./routes/app/imports')),
             guarded('reports', 'reports', () => import('./routes/app/reports')),
+            guarded('reports', 'reports/:id', () => import('./routes/app/reports')),
             guarded('review', 'review', () => import('./routes/app/review')),
+            guarded('review', 'review/:id', () => import('./routes/app/review')),
             guarded('knowledge', 'knowledge', () => import('./routes/app/knowledge')),
             guarded('shop', 'shop', () => import('./routes/app/shop')),
             guarded('insights', 'insights', () => import('./routes/app/insights')),

@@ -19,8 +19,8 @@ describe('Home', () => {
 
     await app.user.type(await screen.findByRole('searchbox', { name: 'Look up a fault code' }), ' P0456 {Enter}');
 
-    expect(await screen.findByRole('heading', { level: 1, name: 'Fault codes' })).toBeInTheDocument();
+    // The code page: this test's server does not know the code, so the page decodes it itself.
+    expect(await screen.findByRole('heading', { level: 1, name: 'P0456' })).toBeInTheDocument();
     expect(app.router.state.location.pathname).toBe('/codes/P0456');
-    expect(screen.getByText('P0456')).toBeInTheDocument();
   });
 });

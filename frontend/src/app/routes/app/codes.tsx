@@ -1,19 +1,37 @@
-import { Typography } from 'antd';
-import { useParams } from 'react-router-dom';
-import { PagePlaceholder } from '@/components/page-placeholder';
+import { Card, Col, Row, Typography } from 'antd';
+import { useSearchParams } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
 import { section } from '@/config/sections';
+import { CodeEntry } from '@/features/codes/components/code-entry';
+import { CodeSearch } from '@/features/codes/components/code-search';
+import { CodesTable } from '@/features/codes/components/codes-table';
+import { parseCodeListParams, toCodeListSearch } from '@/features/codes/utils/list-params';
 
-// Placeholder until the code decoder is built; the home page's code box already links here.
 export function Component() {
-  const { code } = useParams();
+  const [searchParams, setSearchParams] = useSearchParams();
+  const params = parseCodeListParams(searchParams);
+  const page = section('codes');
   return (
     <>
-      <PagePlaceholder section={section('codes')} />
-      {code && (
-        <Typography.Paragraph>
-          You asked about <Typography.Text code>{code}</Typography.Text>.
-        </Typography.Paragraph>
-      )}
+      <PageHeader title={page.label} description={page.purpose} />
+      <Row gutter={[24, 24]}>
+        <Col xs={24} xl={12}>
+          <Card style={{ height: '100%' }}>
+            <CodeEntry label="Look up a fault code" autoFocus />
+          </Card>
+        </Col>
+        <Col xs={24} xl={12}>
+          <Card style={{ height: '100%' }}>
+            <CodeSearch />
+          </Card>
+        </Col>
+      </Row>
+      <section aria-labelledby="browse-codes" style={{ marginTop: 32 }}>
+        <Typography.Title level={2} id="browse-codes" style={{ fontSize: 22 }}>
+          Browse the catalogue
+        </Typography.Title>
+        <CodesTable params={params} onParamsChange={(next) => setSearchParams(toCodeListSearch(next))} />
+      </section>
     </>
   );
 }

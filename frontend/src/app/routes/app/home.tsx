@@ -1,10 +1,10 @@
 import { ArrowRightOutlined } from '@ant-design/icons';
 import type { ShopDto } from '@causeway/shared';
-import { Card, Col, Descriptions, Input, Row, Typography } from 'antd';
-import { Link, useNavigate } from 'react-router-dom';
+import { Card, Col, Descriptions, Row, Typography } from 'antd';
+import { Link } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { sectionIcon, visibleSections } from '@/components/layouts/navigation';
-import { paths } from '@/config/paths';
+import { CodeEntry } from '@/features/codes/components/code-entry';
 import { useCurrentUser } from '@/lib/current-user';
 import { formatMoney, formatTaxRate, grossFromNet } from '@/utils/money';
 
@@ -27,26 +27,10 @@ function LabourRate({ shop }: { shop: ShopDto }) {
   );
 }
 
-function CodeEntry() {
-  const navigate = useNavigate();
+function CodeBox() {
   return (
-    <Card title={<label htmlFor="code-entry">Look up a fault code</label>}>
-      <Input.Search
-        id="code-entry"
-        placeholder="e.g. P0456"
-        enterButton="Look up"
-        size="large"
-        autoComplete="off"
-        autoCapitalize="characters"
-        spellCheck={false}
-        onSearch={(value) => {
-          const code = value.trim();
-          if (code) navigate(paths.code(code));
-        }}
-      />
-      <Typography.Paragraph type="secondary" style={{ marginTop: 8, marginBottom: 0 }}>
-        Type the code your scan tool read and press Enter.
-      </Typography.Paragraph>
+    <Card>
+      <CodeEntry label="Look up a fault code" />
     </Card>
   );
 }
@@ -59,7 +43,7 @@ export function Component() {
       <PageHeader title={`Welcome, ${user.displayName}`} description={user.shop ? `Signed in at ${user.shop.name}.` : 'Your account does not belong to a shop.'} />
       <Row gutter={[24, 24]}>
         <Col xs={24} lg={12}>
-          <CodeEntry />
+          <CodeBox />
         </Col>
         <Col xs={24} lg={12}>
           {user.shop ? (

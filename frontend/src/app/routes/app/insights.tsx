@@ -1,7 +1,24 @@
-import { PagePlaceholder } from '@/components/page-placeholder';
+import { useSearchParams } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
 import { section } from '@/config/sections';
+import { InsightsView } from '@/features/insights/components/insights-view';
+import { parseInsightsParams, toInsightsSearch } from '@/features/insights/utils/params';
+import { useCurrentUser } from '@/lib/current-user';
+import { browserLocale } from '@/utils/format';
 
-// Placeholder until this page is built.
+/** Shop insights; recharts comes with this lazily loaded page only. */
 export function Component() {
-  return <PagePlaceholder section={section('insights')} />;
+  const { shop } = useCurrentUser();
+  const [searchParams, setSearchParams] = useSearchParams();
+  const page = section('insights');
+  return (
+    <>
+      <PageHeader title={page.label} description={page.purpose} />
+      <InsightsView
+        params={parseInsightsParams(searchParams)}
+        onParamsChange={(next) => setSearchParams(toInsightsSearch(next))}
+        locale={shop?.locale ?? browserLocale()}
+      />
+    </>
+  );
 }

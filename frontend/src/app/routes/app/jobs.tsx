@@ -1,7 +1,57 @@
-import { PagePlaceholder } from '@/components/page-placeholder';
+import { PlusOutlined } from '@ant-design/icons';
+import { Button, Drawer } from 'antd';
+import { useState } from 'react';
+import { useNavigate, useSearchParams } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
+import { paths } from '@/config/paths';
 import { section } from '@/config/sections';
+import { JobFilters } from '@/features/jobs/components/job-filters';
+import { JobsTable } from '@/features/jobs/components/jobs-table';
+import { NewJobForm } from '@/features/jobs/components/new-job-form';
+import { parseJobListParams, toJobListSearch } from '@/features/jobs/utils/list-params';
+import { VehicleForm } from '@/features/vehicles/components/vehicle-form';
+import { useCurrentUser } from '@/lib/current-user';
+import { browserLocale } from '@/utils/format';
 
-// Placeholder until this page is built.
 export function Component() {
-  return <PagePlaceholder section={section('jobs')} />;
+  const user = useCurrentUser();
+  const { shop } = user;
+  const navigate = useNavigate();
+  const [searchParams, setSearchParams] = useSearchParams();
+  const [opening, setOpening] = useState(false);
+  const params = parseJobListParams(searchParams);
+  const page = section('jobs');
+  const locale = shop?.locale ?? browserLocale();
+  const onParamsChange = (next: typeof params) => setSearchParams(toJobListSearch(next));
+  return (
+    <>
+      <PageHeader
+        title={page.label}
+        description={page.purpose}
+        extra={
+          shop && (
+            <Button type="primary" icon={<PlusOutlined aria-hidden />} onClick={() => setOpening(true)}>
+              New job
+            </Button>
+          )
+        }
+      />
+      <JobFilters params={params} onParamsChange={onParamsChange} currentUserId={user.id} shopOwner={user.shopOwner} />
+      <JobsTable params={params} onParamsChange={onParamsChange} locale={locale} jobHref={paths.job} />
+      <Drawer title="New job" open={opening} onClose={() => setOpening(false)} destroyOnHidden size="large">
+        {shop && (
+          <NewJobForm
+            distanceUnit={shop.distanceUnit}
+            locale={locale}
+            onCancel={() => setOpening(false)}
+            onCreated={(job) => {
+              setOpening(false);
+              navigate(paths.job(job.id));
+            }}
+            renderNewVehicle={(picked) => <VehicleForm distanceUnit={shop.distanceUnit} locale={locale} onSaved={(vehicle) => picked(vehicle.id)} />}
+          />
+        )}
+      </Drawer>
+    </>
+  );
 }

@@ -1,0 +1,165 @@
+import type { AuditEntryDto } from '@causeway/shared';
+import { Alert, Button, Col, Form, Input, Row, Select, Table, Tag, Typography, type TableColumnsType, type TableProps } from 'antd';
+import { useEffect } from 'react';
+import { formatDateTime } from '@/utils/format';
+import { useAuditEntries } from '../api/get-audit-entries';
+import { ACTION_OPTIONS, actionLabel, ENTITY_TYPE_LABELS } from '../utils/labels';
+import { PAGE_SIZES, type AuditListParams } from '../utils/list-params';
+import { BeforeAfter } from './before-after';
+
+type AuditTableProps = {
+  params: AuditListParams;
+  onParamsChange: (params: AuditListParams) => void;
+  locale: string;
+};
+
+type FilterValues = Pick<AuditListParams, 'actor' | 'action' | 'entityType' | 'from' | 'to'>;
+
+function filtersOf(params: AuditListParams): FilterValues {
+  return { actor: params.actor, action: params.action, entityType: params.entityType, from: params.from, to: params.to };
+}
+
+export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) {
+  const entries = useAuditEntries(params);
+  const [form] = Form.useForm<FilterValues>();
+
+  // The address bar is the truth: going back or forward puts its filters in the form.
+  const applied = JSON.stringify(filtersOf(params));
+  useEffect(() => {
+    form.setFieldsValue(JSON.parse(applied) as FilterValues);
+  }, [form, applied]);
+
+  const columns: TableColumnsType<AuditEntryDto> = [
+    { title: 'When', key: 'at', render: (_: unknown, e) => formatDateTime(e.at, locale) },
+    { title: 'Who', key: 'actor', render: (_: unknown, e) => e.actorEmail },
+    {
+      title: 'Action',
+      key: 'action',
+      render: (_: unknown, e) => (
+        <>
+          {actionLabel(e.action)} <Typography.Text type="secondary" code>{e.action}</Typography.Text>
+        </>
+      ),
+    },
+    {
+      title: 'What',
+      key: 'entity',
+      render: (_: unknown, e) => (
+        <>
+          <Tag>{ENTITY_TYPE_LABELS[e.entityType] ?? e.entityType}</Tag>
+          <Typography.Text style={{ wordBreak: 'break-all' }}>{e.entityId}</Typography.Text>
+        </>
+      ),
+    },
+    {
+      title: 'Note',
+      key: 'note',
+      render: (_: unknown, e) => (e.note ? <Typography.Paragraph ellipsis={{ rows: 2 }} style={{ marginBottom: 0, maxWidth: 320 }}>{e.note}</Typography.Paragraph> : null),
+    },
+  ];
+
+  const onChange: TableProps<AuditEntryDto>['onChange'] = (pagination, _filters, _sorter, extra) => {
+    const pageSize = pagination.pageSize ?? params.pageSize;
+    onParamsChange({ ...params, pageSize, page: extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1 });
+  };
+
+  const filtered = !!(params.actor || params.action || params.entityType || params.from || params.to);
+
+  return (
+    <>
+      <Form<FilterValues>
+        form={form}
+        layout="vertical"
+        initialValues={filtersOf(params)}
+        onFinish={(values) =>
+          onParamsChange({
+            ...params,
+            page: 1,
+            actor: values.actor?.trim() ?? '',
+            action: values.action ?? '',
+            entityType: values.entityType ?? '',
+            from: values.from ?? '',
+            to: values.to ?? '',
+          })
+        }
+        role="search"
+        aria-label="Filter the audit log"
+        style={{ marginBottom: 16 }}
+      >
+        <Row gutter={16} align="bottom">
+          <Col xs={24} md={12} xl={6}>
+            <Form.Item name="actor" label="Who (e-mail or user id)">
+              <Input allowClear autoComplete="off" placeholder="e.g. moderator@" />
+            </Form.Item>
+          </Col>
+          <Col xs={24} md={12} xl={5}>
+            <Form.Item name="action" label="Action">
+              <Select allowClear placeholder="Any action" options={ACTION_OPTIONS} showSearch={{ optionFilterProp: 'label' }} />
+            </Form.Item>
+          </Col>
+          <Col xs={24} md={12} xl={4}>
+            <Form.Item name="entityType" label="What was changed">
+              <Select allowClear placeholder="Anything" options={Object.entries(ENTITY_TYPE_LABELS).map(([value, label]) => ({ value, label }))} />
+            </Form.Item>
+          </Col>
+          <Col xs={12} md={6} xl={3}>
+            <Form.Item
+              name="from"
+              label="From"
+              rules={[
+                ({ getFieldValue }) => ({
+                  validator: async (_r, value: string | undefined) => {
+                    const to = getFieldValue('to') as string | undefined;
+                    if (value && to && value > to) throw new Error('From must not be after To');
+                  },
+                }),
+              ]}
+            >
+              <Input type="date" />
+            </Form.Item>
+          </Col>
+          <Col xs={12} md={6} xl={3}>
+            <Form.Item name="to" label="To">
+              <Input type="date" />
+            </Form.Item>
+          </Col>
+          <Col xs={24} xl={3}>
+            <Form.Item label=" " colon={false}>
+              <Button type="primary" htmlType="submit" block>
+                Filter
+              </Button>
+            </Form.Item>
+          </Col>
+        </Row>
+        {filtered && (
+          <Button
+            type="link"
+            onClick={() => onParamsChange({ ...params, page: 1, actor: '', action: '', entityType: '', from: '', to: '' })}
+            style={{ paddingInline: 0 }}
+          >
+            Clear the filters
+          </Button>
+        )}
+      </Form>
+      {entries.isError && <Alert type="error" showIcon title={entries.error.message} style={{ marginBottom: 16 }} />}
+      <Table<AuditEntryDto>
+        rowKey="id"
+        columns={columns}
+        dataSource={entries.data?.items ?? []}
+        loading={entries.isFetching}
+        onChange={onChange}
+        scroll={{ x: 'max-content' }}
+        expandable={{ expandedRowRender: (e) => <BeforeAfter entry={e} />, expandRowByClick: false }}
+        locale={{ emptyText: filtered ? 'No entries match these filters' : 'Nothing has been recorded yet' }}
+        pagination={{
+          current: params.page,
+          pageSize: params.pageSize,
+          total: entries.data?.total ?? 0,
+          showSizeChanger: true,
+          pageSizeOptions: PAGE_SIZES.map(String),
+          showTotal: (total) => `${total} ${total === 1 ? 'entry' : 'entries'}`,
+        }}
+      />
+    </>
+  );
+}

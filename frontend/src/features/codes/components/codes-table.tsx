@@ -1,0 +1,125 @@
+import { DTC_CONTROL_LABELS, DTC_SYSTEM_NAMES, type CodeSummaryDto, type DtcControl, type DtcSystem } from '@causeway/shared';
+import { Alert, Input, Select, Space, Table, Tag, type TableColumnsType, type TableProps } from 'antd';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { useSearchCodes } from '../api/search-codes';
+import { CODE_CONTROLS, CODE_PAGE_SIZES, CODE_SORT_FIELDS, CODE_SYSTEMS, type CodeListParams, type CodeSortField } from '../utils/list-params';
+
+type CodesTableProps = {
+  params: CodeListParams;
+  onParamsChange: (params: CodeListParams) => void;
+};
+
+function sortOrderOf(params: CodeListParams, field: CodeSortField) {
+  if (params.sort !== field) return null;
+  return params.order === 'desc' ? 'descend' : 'ascend';
+}
+
+function systemName(system: string): string {
+  return DTC_SYSTEM_NAMES[system as DtcSystem] ?? system;
+}
+
+function controlLabel(control: string): string {
+  return DTC_CONTROL_LABELS[control as DtcControl] ?? control;
+}
+
+/** The catalogue page by page, searched, filtered and sorted by the server; every choice is in the address. */
+export function CodesTable({ params, onParamsChange }: CodesTableProps) {
+  const codes = useSearchCodes(params);
+
+  const columns: TableColumnsType<CodeSummaryDto> = [
+    {
+      title: 'Code',
+      dataIndex: 'code',
+      key: 'code',
+      sorter: true,
+      sortOrder: sortOrderOf(params, 'code'),
+      width: 110,
+      render: (code: string, row) => (
+        <Link to={paths.code(code) + (row.make ? `?make=${encodeURIComponent(row.make)}` : '')} style={{ fontWeight: 600 }}>
+          {code}
+        </Link>
+      ),
+    },
+    {
+      title: 'Title',
+      dataIndex: 'title',
+      key: 'title',
+      sorter: true,
+      sortOrder: sortOrderOf(params, 'title'),
+      render: (title: string, row) => (
+        <>
+          {title} {row.make && <Tag>{row.make} only</Tag>}
+        </>
+      ),
+    },
+    { title: 'Subsystem', dataIndex: 'subsystem', key: 'subsystem', sorter: true, sortOrder: sortOrderOf(params, 'subsystem') },
+    { title: 'System', dataIndex: 'system', key: 'system', render: systemName },
+    { title: 'Who controls it', dataIndex: 'control', key: 'control', render: controlLabel },
+  ];
+
+  const onChange: TableProps<CodeSummaryDto>['onChange'] = (pagination, _filters, sorter, extra) => {
+    const { columnKey, order } = (Array.isArray(sorter) ? sorter[0] : sorter) ?? {};
+    const sortField = CODE_SORT_FIELDS.find((f) => f === columnKey);
+    const pageSize = pagination.pageSize ?? params.pageSize;
+    // A new order or page size starts again at the first page.
+    const page = extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1;
+    onParamsChange({
+      ...params,
+      page,
+      pageSize,
+      sort: order && sortField ? sortField : undefined,
+      order: order && sortField ? (order === 'descend' ? 'desc' : 'asc') : undefined,
+    });
+  };
+
+  return (
+    <>
+      <Space wrap size={12} style={{ marginBottom: 16 }}>
+        <Input.Search
+          key={params.q}
+          defaultValue={params.q}
+          placeholder="Code prefix or words"
+          aria-label="Filter the catalogue by code prefix or words"
+          allowClear
+          enterButton="Filter"
+          maxLength={100}
+          onSearch={(q) => onParamsChange({ ...params, q: q.trim(), page: 1 })}
+          style={{ width: 360 }}
+        />
+        <Select<DtcSystem | ''>
+          aria-label="System"
+          value={params.system ?? ''}
+          onChange={(system) => onParamsChange({ ...params, system: system || undefined, page: 1 })}
+          options={[{ value: '', label: 'Every system' }, ...CODE_SYSTEMS.map((s) => ({ value: s, label: `${DTC_SYSTEM_NAMES[s]} (${s})` }))]}
+          style={{ width: 200 }}
+        />
+        <Select<DtcControl | ''>
+          aria-label="Who controls it"
+          value={params.control ?? ''}
+          onChange={(control) => onParamsChange({ ...params, control: control || undefined, page: 1 })}
+          options={[{ value: '', label: 'Any range' }, ...CODE_CONTROLS.map((c) => ({ value: c, label: DTC_CONTROL_LABELS[c] }))]}
+          style={{ width: 260 }}
+        />
+      </Space>
+      {codes.isError && <Alert type="error" showIcon title={codes.error.message} style={{ marginBottom: 16 }} />}
+      <Table<CodeSummaryDto>
+        rowKey={(row) => `${row.code}|${row.make ?? ''}`}
+        columns={columns}
+        dataSource={codes.data?.items ?? []}
+        loading={codes.isFetching}
+        onChange={onChange}
+        scroll={{ x: 960 }}
+        locale={{ emptyText: params.q || params.system || params.control ? 'No codes match these filters' : 'The catalogue is empty' }}
+        pagination={{
+          current: params.page,
+          pageSize: params.pageSize,
+          total: codes.data?.total ?? 0,
+          showSizeChanger: true,
+          pageSizeOptions: CODE_PAGE_SIZES.map(String),
+          showTotal: (total) => `${total} ${total === 1 ? 'code' : 'codes'}`,
+        }}
+      />
+    </>
+  );
+}
