@@ -54,7 +54,8 @@ describe('Audit log', () => {
       }),
     );
 
-    // A row opens to its before and after, side by side.
+    // A row opens to its before and after, side by side (once the new page has arrived).
+    await waitFor(() => expect(document.querySelector('.ant-spin-spinning')).toBeNull());
     await app.user.click(screen.getByRole('button', { name: /expand row/i }));
     expect(await screen.findByRole('region', { name: 'Before' })).toHaveTextContent('"prior": 0.3');
     expect(screen.getByRole('region', { name: 'After' })).toHaveTextContent('"prior": 0.25');

@@ -13,10 +13,17 @@ type AuditTableProps = {
   locale: string;
 };
 
-type FilterValues = Pick<AuditListParams, 'actor' | 'action' | 'entityType' | 'from' | 'to'>;
+interface FilterValues {
+  actor?: string;
+  /** undefined (not '') so the selects show their placeholder. */
+  action?: string;
+  entityType?: string;
+  from?: string;
+  to?: string;
+}
 
 function filtersOf(params: AuditListParams): FilterValues {
-  return { actor: params.actor, action: params.action, entityType: params.entityType, from: params.from, to: params.to };
+  return { actor: params.actor, action: params.action || undefined, entityType: params.entityType || undefined, from: params.from, to: params.to };
 }
 
 export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) {
@@ -26,7 +33,7 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
   // The address bar is the truth: going back or forward puts its filters in the form.
   const applied = JSON.stringify(filtersOf(params));
   useEffect(() => {
-    form.setFieldsValue(JSON.parse(applied) as FilterValues);
+    form.setFieldsValue({ actor: '', action: undefined, entityType: undefined, from: '', to: '', ...(JSON.parse(applied) as FilterValues) });
   }, [form, applied]);
 
   const columns: TableColumnsType<AuditEntryDto> = [
@@ -45,10 +52,12 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
       title: 'What',
       key: 'entity',
       render: (_: unknown, e) => (
-        <>
+        <div style={{ maxWidth: 260 }}>
           <Tag>{ENTITY_TYPE_LABELS[e.entityType] ?? e.entityType}</Tag>
-          <Typography.Text style={{ wordBreak: 'break-all' }}>{e.entityId}</Typography.Text>
-        </>
+          <Typography.Text type="secondary" style={{ display: 'block', wordBreak: 'break-all', fontSize: 14 }}>
+            {e.entityId}
+          </Typography.Text>
+        </div>
       ),
     },
     {
@@ -87,7 +96,7 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
         style={{ marginBottom: 16 }}
       >
         <Row gutter={16} align="bottom">
-          <Col xs={24} md={12} xl={6}>
+          <Col xs={24} md={12} xl={5}>
             <Form.Item name="actor" label="Who (e-mail or user id)">
               <Input allowClear autoComplete="off" placeholder="e.g. moderator@" />
             </Form.Item>
@@ -102,7 +111,7 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
               <Select allowClear placeholder="Anything" options={Object.entries(ENTITY_TYPE_LABELS).map(([value, label]) => ({ value, label }))} />
             </Form.Item>
           </Col>
-          <Col xs={12} md={6} xl={3}>
+          <Col xs={12} md={6} xl={4}>
             <Form.Item
               name="from"
               label="From"
@@ -118,12 +127,12 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
               <Input type="date" />
             </Form.Item>
           </Col>
-          <Col xs={12} md={6} xl={3}>
+          <Col xs={12} md={6} xl={4}>
             <Form.Item name="to" label="To">
               <Input type="date" />
             </Form.Item>
           </Col>
-          <Col xs={24} xl={3}>
+          <Col xs={24} xl={2}>
             <Form.Item label=" " colon={false}>
               <Button type="primary" htmlType="submit" block>
                 Filter
@@ -148,7 +157,6 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
         dataSource={entries.data?.items ?? []}
         loading={entries.isFetching}
         onChange={onChange}
-        scroll={{ x: 'max-content' }}
         expandable={{ expandedRowRender: (e) => <BeforeAfter entry={e} />, expandRowByClick: false }}
         locale={{ emptyText: filtered ? 'No entries match these filters' : 'Nothing has been recorded yet' }}
         pagination={{

@@ -1,6 +1,6 @@
 import type { EstimateAnswerDto, PublicEstimateDto } from '@causeway/shared';
 import { screen, waitFor, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { FUEL_CAUTION, makeFixPath } from '@/testing/job-data';
 import { fail, jsonResponse, ok } from '@/testing/mock-api';
 import { renderApp, waitForPageLoaded } from '@/testing/test-utils';
@@ -36,6 +36,10 @@ function makePublicEstimate(overrides: Partial<PublicEstimateDto> = {}): PublicE
     ...overrides,
   };
 }
+
+beforeAll(async () => {
+  await import('@/app/routes/public-estimate');
+}, 60_000);
 
 describe('Public staged estimate', () => {
   it('lets the owner approve a stage, without an account', async () => {

@@ -1,6 +1,7 @@
 import { KNOWLEDGE_LIMITS, type CorrectionField, type PossibleCauseRowDto } from '@causeway/shared';
 import { Form, Input, InputNumber, Radio, Select, Typography } from 'antd';
 import { formatMoney } from '@/utils/money';
+import { useDecodedCode } from '../api/decode-code';
 import { useCodeCauses } from '../api/get-code-causes';
 import { describeScope } from '../utils/describe';
 import { CORRECTION_FIELD_LABELS } from '../utils/labels';
@@ -24,8 +25,9 @@ export function CorrectionFields({ locale }: CorrectionFieldsProps) {
   const field = Form.useWatch<CorrectionField | undefined>('field');
   const selected = Form.useWatch<string | undefined>('cause');
   const causes = useCodeCauses(target === 'cause' ? code : null);
+  const decoded = useDecodedCode(target === 'code' ? code : null);
   const row = (causes.data ?? []).find((c) => causeKey(c) === selected);
-  const now = currentValue(row, field, locale);
+  const now = target === 'code' ? (field === 'title' ? (decoded.data?.known?.title ?? null) : null) : currentValue(row, field, locale);
   const fields: CorrectionField[] = target === 'cause' ? ['partCostMinor', 'replaceHours'] : ['title', 'description'];
 
   return (
@@ -58,7 +60,7 @@ export function CorrectionFields({ locale }: CorrectionFieldsProps) {
         </Form.Item>
       )}
       <Form.Item name="field" label="Field">
-        <Radio.Group optionType="button" options={fields.map((f) => ({ value: f, label: CORRECTION_FIELD_LABELS[f] }))} />
+        <Radio.Group optionType="button" buttonStyle="solid" options={fields.map((f) => ({ value: f, label: CORRECTION_FIELD_LABELS[f] }))} />
       </Form.Item>
       {now && (
         <Typography.Paragraph>

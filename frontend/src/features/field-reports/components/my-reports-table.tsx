@@ -18,7 +18,7 @@ function DecisionNote({ id }: { id: string }) {
   const note = report.data?.decisionNote;
   if (!note) return <Typography.Text type="secondary">No note</Typography.Text>;
   return (
-    <Typography.Paragraph style={{ marginBottom: 0, maxWidth: 420 }} ellipsis={{ rows: 3, expandable: true, symbol: 'more' }}>
+    <Typography.Paragraph style={{ marginBottom: 0, maxWidth: 300 }} ellipsis={{ rows: 3, expandable: true, symbol: 'more' }}>
       {report.data?.decidedBy ? <Typography.Text strong>{report.data.decidedBy.displayName}: </Typography.Text> : null}
       {note}
     </Typography.Paragraph>
@@ -45,7 +45,7 @@ export function MyReportsTable({ params, onParamsChange, reportPath, locale }: M
       title: 'Report',
       key: 'title',
       render: (_: unknown, r) => (
-        <Link to={reportPath(r.id)}>
+        <Link to={reportPath(r.id)} style={{ display: 'inline-block', maxWidth: 360 }}>
           {r.title}
           {r.attachmentCount > 0 && <Typography.Text type="secondary">{` · ${r.attachmentCount} ${r.attachmentCount === 1 ? 'file' : 'files'}`}</Typography.Text>}
         </Link>

@@ -292,7 +292,14 @@ export function reportFieldErrorOptions(values: ReportFormValues): FieldErrorOpt
  */
 export function inFormTerms(error: unknown): unknown {
   if (!isApiError(error) || error.fieldErrors.length === 0) return error;
-  const errors: FieldError[] = error.fieldErrors.map((e) => {
+  const errors: FieldError[] = error.fieldErrors.map((raw) => {
+    // `payload.triedFirst.2` belongs to the one "tried first" field; whole sentences become predicates.
+    const e = {
+      field: raw.field.replace(/^payload\.triedFirst\.\d+$/, 'payload.triedFirst'),
+      message: raw.message
+        .replace(/^there is no (?:[a-z-]+ )+?(\S+)(;|$)/, 'names $1, which does not exist$2')
+        .replace(/^the (?:teardown|part|scope) is for /, 'is for '),
+    };
     if (e.field === 'payload.prior') return { ...e, message: e.message.replace(/between 0 and 1\b/, 'between 0 % and 100 %') };
     if (e.field === 'payload.partCostMinor' || (e.field === 'payload.value' && /minor units/.test(e.message))) {
       return { ...e, message: e.message.replace(/between 0 and (\d+)/, (_m, max: string) => `between 0 and ${(Number(max) / 100).toLocaleString('en')}`).replace(/\s*\(minor units[^)]*\)/, '') };

@@ -1,5 +1,5 @@
 import { screen, waitFor, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { fail, jsonResponse, ok } from '@/testing/mock-api';
 import { makeFixPath, makeJob, makeJobCode, makeVehicle, TEST_JOB_ID, TEST_VEHICLE_ID } from '@/testing/job-data';
 import { makeUser } from '@/testing/test-data';
@@ -41,6 +41,12 @@ function stageTitles(): string[] {
     .getAllByTestId('fix-path-stage')
     .map((el) => el.textContent ?? '');
 }
+
+// The job page is a large lazy route; load it once up front, so a cold transform on a busy machine
+// is not counted against the wait for the page to render.
+beforeAll(async () => {
+  await Promise.all([import('@/app/routes/app/root'), import('@/app/routes/app/job')]);
+}, 60_000);
 
 describe('Job page', () => {
   it('records a step with the right body, reads the job again and shows the new fix path', async () => {

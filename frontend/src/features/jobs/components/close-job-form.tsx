@@ -1,9 +1,11 @@
 import type { CloseJobRequest, JobDto, JobResolution } from '@causeway/shared';
 import { Alert, Button, Checkbox, Form, Input, Radio, Select, Space, Typography } from 'antd';
+import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { isApiError } from '@/lib/api-client';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
 import { useCloseJob } from '../api/close-job';
+import { JOBS_QUERY_KEY } from '../api/get-jobs';
 import { listNames } from '../utils/fix-path';
 
 /** "A cause not listed": the fix was a part outside the code's possible causes. */
@@ -39,12 +41,14 @@ export function CloseJobForm({ job, onClosed, onCancel }: CloseJobFormProps) {
   const [form] = Form.useForm<CloseValues>();
   const [alert, setAlert] = useState<string | null>(null);
   const resolution = (Form.useWatch('resolution', form) as JobResolution | undefined) ?? 'resolved';
+  const queryClient = useQueryClient();
   const close = useCloseJob({
     mutationConfig: {
       onSuccess: onClosed,
       onError: (error) => {
         if (isApiError(error) && error.status === 409) {
           setAlert(error.message);
+          void queryClient.invalidateQueries({ queryKey: JOBS_QUERY_KEY });
           return;
         }
         setAlert(formAlertMessage(error, applyFieldErrors(form, error, { labels: { verificationPassed: 'Verification', notes: 'Notes' } })));

@@ -1,10 +1,12 @@
 import { formatMoney, formatPercent, type CreateStepRequest, type JobDto, type StepKind, type StepResult } from '@causeway/shared';
 import { Alert, App, Button, Col, Form, Input, InputNumber, Radio, Row, Select, Typography } from 'antd';
+import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { isApiError } from '@/lib/api-client';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
 import { currencyFractionDigits, fromMinorUnits, toMinorUnits } from '@/utils/money';
 import { useCreateStep } from '../api/create-step';
+import { JOBS_QUERY_KEY } from '../api/get-jobs';
 import { creditShares, listNames, plannedStepCostMinor } from '../utils/fix-path';
 
 interface StepValues {
@@ -71,6 +73,7 @@ export function StepForm({ job, onRecorded, onClosedConflict }: StepFormProps) {
     return options;
   })();
 
+  const queryClient = useQueryClient();
   const create = useCreateStep({
     mutationConfig: {
       onSuccess: (saved) => {
@@ -83,6 +86,8 @@ export function StepForm({ job, onRecorded, onClosedConflict }: StepFormProps) {
         if (isApiError(error) && error.status === 409) {
           setAlert(error.message);
           onClosedConflict?.(error.message);
+          // Someone closed it meanwhile: show the job as it now is.
+          void queryClient.invalidateQueries({ queryKey: JOBS_QUERY_KEY });
           return;
         }
         setAlert(formAlertMessage(error, applyFieldErrors(form, error, { labels: LABELS, rename: { actualCostMinor: 'cost' } })));
@@ -138,7 +143,7 @@ export function StepForm({ job, onRecorded, onClosedConflict }: StepFormProps) {
           </Col>
         )}
         <Col xs={24} md={job.codes.length > 1 ? 16 : 24}>
-          <Form.Item name="kind" label={LABELS.kind}>
+          <Form.Item name="kind" label={LABELS.kind} rules={[{ required: true }]}>
             <Radio.Group
               optionType="button"
               buttonStyle="solid"

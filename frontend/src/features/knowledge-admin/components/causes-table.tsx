@@ -59,7 +59,14 @@ export function CausesTable({ code, page, onCodeChange, onPageChange, locale, cu
     {
       title: 'Check',
       key: 'check',
-      render: (_: unknown, c) => (c.check ? `${c.check.description} (${new Intl.NumberFormat(locale).format(c.check.hours)} h${c.check.mustPrecede ? ', first' : ''})` : ''),
+      render: (_: unknown, c) =>
+        c.check ? (
+          <Typography.Paragraph ellipsis={{ rows: 2, tooltip: c.check.description }} style={{ marginBottom: 0, maxWidth: 280 }}>
+            {`${c.check.description} (${new Intl.NumberFormat(locale).format(c.check.hours)} h${c.check.mustPrecede ? ', before replacing' : ''})`}
+          </Typography.Paragraph>
+        ) : (
+          ''
+        ),
     },
     {
       title: 'Actions',

@@ -1,6 +1,17 @@
 import type { FieldError } from '@causeway/shared';
 import { ApiError, isApiError } from '@/lib/api-client';
 
+/**
+ * Some server messages are whole sentences ("the priors of … would sum to …", "there is no
+ * teardown x"); the form puts the field's label in front, so they are turned into predicates.
+ */
+export function asPredicate(message: string): string {
+  return message
+    .replace(/^the priors of (.+?) would sum to ([^;]+)/, 'would make the priors of $1 sum to $2')
+    .replace(/^the (?:teardown|part|scope) is for /, 'is for ')
+    .replace(/^there is no (?:[a-z-]+ )+?(\S+)$/, 'names $1, which does not exist');
+}
+
 function percent(fraction: string): string {
   return `${Number((Number(fraction) * 100).toFixed(1))} %`;
 }
@@ -23,7 +34,7 @@ export function inFormTerms(error: unknown, nested: Record<string, string> = {})
         .replace(/at most 1 \(/, 'at most 100 % (');
     }
     if (e.field === 'partCostMinor') message = message.replace(/between 0 and (\d+)/, (_m, max: string) => `between 0 and ${(Number(max) / 100).toLocaleString('en')}`);
-    return { field, message };
+    return { field, message: asPredicate(message) };
   });
   return new ApiError(error.status, { ...error.body, errors });
 }

@@ -37,11 +37,12 @@ type ChangeTableProps = {
 /** Each field approving would write: its value now beside its value afterwards. */
 export function ChangeTable({ changes, report, locale }: ChangeTableProps) {
   const columns: TableColumnsType<ReviewFieldChangeDto> = [
-    { title: 'What', key: 'label', render: (_: unknown, c) => label(c, currencyOf(c, report)) },
-    { title: 'Now', key: 'before', render: (_: unknown, c) => show(c.before, c, currencyOf(c, report), locale) },
+    { title: 'What', key: 'label', width: '34%', render: (_: unknown, c) => label(c, currencyOf(c, report)) },
+    { title: 'Now', key: 'before', width: '33%', render: (_: unknown, c) => show(c.before, c, currencyOf(c, report), locale) },
     {
       title: 'After approval',
       key: 'after',
+      width: '33%',
       render: (_: unknown, c) => {
         const changed = c.before !== c.after;
         const value = show(c.after, c, currencyOf(c, report), locale);

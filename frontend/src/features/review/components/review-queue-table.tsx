@@ -24,7 +24,7 @@ export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }:
       title: 'Report',
       key: 'title',
       render: (_: unknown, r) => (
-        <Flex vertical gap={2}>
+        <Flex vertical gap={2} style={{ maxWidth: 420 }}>
           <Link to={reportPath(r.id)}>{r.title}</Link>
           <span>
             {r.proposesNewCode && <Tag>New code for the catalogue</Tag>}
