@@ -9,3 +9,4 @@ export * from './vin/index';
 export * from './money/index';
 export * from './likelihood/index';
 export * from './fixpath/index';
+export * from './estimate/stages';

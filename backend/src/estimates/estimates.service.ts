@@ -16,7 +16,7 @@ import { EstimateAnswer } from './entities/estimate-answer.entity';
 import { Estimate } from './entities/estimate.entity';
 import { estimateMail } from './estimate-mail';
 import { decisionsOf, ESTIMATE_NOTE, ESTIMATE_ROUNDING, sortedAnswers, toEstimateDto } from './estimate-mapper';
-import { buildStages, type CodeFixPath } from './estimate-stages';
+import { buildStages, type CodeFixPath } from '@causeway/shared';
 import { estimatesConfig, type EstimatesConfig } from './estimates.config';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;

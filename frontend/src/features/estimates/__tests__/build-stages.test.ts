@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { makeFixPath } from '@/testing/job-data';
-import { buildStages } from '../utils/build-stages';
+import { buildStages } from '@causeway/shared';
 
 describe('buildStages (the estimate preview)', () => {
   it('prices a stage net, with tax per stage and gross: 20 % VAT on 120.00 is 24.00, 144.00 in all (product.md)', () => {

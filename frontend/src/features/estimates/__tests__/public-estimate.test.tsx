@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { FUEL_CAUTION, makeFixPath } from '@/testing/job-data';
 import { fail, jsonResponse, ok } from '@/testing/mock-api';
 import { renderApp, waitForPageLoaded } from '@/testing/test-utils';
-import { buildStages } from '../utils/build-stages';
+import { buildStages } from '@causeway/shared';
 
 const TOKEN = 'Zm9vYmFyYmF6cXV4cXV1eGNvcmdlZ3JhdWx0Z2FycGx5';
 const URL = `/api/public/estimates/${TOKEN}`;

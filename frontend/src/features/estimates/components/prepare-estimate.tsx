@@ -4,7 +4,7 @@ import { Alert, Button, Col, Empty, Form, Input, InputNumber, Row, Typography } 
 import { useMemo, useState } from 'react';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
 import { useCreateEstimate } from '../api/create-estimate';
-import { buildStages, type CodeFixPath } from '../utils/build-stages';
+import { buildStages, type CodeFixPath } from '@causeway/shared';
 import { formatWhen } from '../utils/format';
 import { EstimateStages } from './estimate-stages';
 

@@ -3,7 +3,7 @@ import type { EstimateDto, JobDto } from '@causeway/shared';
 import { Button } from 'antd';
 import { useMemo, type ReactNode } from 'react';
 import { useDocumentTitle } from '@/hooks/use-document-title';
-import { buildStages } from '../utils/build-stages';
+import { buildStages } from '@causeway/shared';
 import { formatDay } from '../utils/format';
 import { EstimateStages } from './estimate-stages';
 import { estimablePaths } from './prepare-estimate';

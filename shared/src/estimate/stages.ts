@@ -1,4 +1,7 @@
-import { applyTaxMinor, type CautionDto, type EstimateStageDto, type EstimateTotals, type FixPathDto, type TaxedMoney } from '@causeway/shared';
+import type { CautionDto } from '../api/codes';
+import type { EstimateStageDto, EstimateTotals, TaxedMoney } from '../api/jobs';
+import type { FixPathDto } from '../api/knowledge';
+import { applyTaxMinor } from '../money/index';
 
 export interface CodeFixPath {
   code: string;
@@ -15,17 +18,22 @@ function sumTaxed(items: TaxedMoney[]): TaxedMoney {
   return items.reduce((s, x) => ({ net: s.net + x.net, tax: s.tax + x.tax, gross: s.gross + x.gross }), { net: 0, tax: 0, gross: 0 });
 }
 
+/** Ends a phrase with a full stop unless it already has closing punctuation. */
+function sentence(s: string): string {
+  const t = s.trim();
+  return /[.!?]$/.test(t) ? t : `${t}.`;
+}
+
 function names(keys: string[], label: Map<string, string>): string {
   const list = keys.map((k) => label.get(k) ?? k);
   return list.length <= 1 ? (list[0] ?? '') : `${list.slice(0, -1).join(', ')} and ${list[list.length - 1]}`;
 }
 
 /**
- * The stages of a staged estimate from the job's current fix paths, worked out the way the
- * server does when it saves one (so the preview is what the owner will get): each stage priced
- * net, with tax per stage at the shop's rate (shared `applyTaxMinor`, half away from zero) and
- * gross, its chance of fixing the fault, the cumulative chance, what happens if it does not
- * fix it, and the safety cautions of what it touches.
+ * The stages of a staged estimate from the current fix path of each code: each priced net, with
+ * tax and gross at the shop's rate (integer minor units, tax per stage), its chance of fixing the
+ * fault, the cumulative chance, what happens if it does not, and its safety cautions. The server
+ * saves exactly this and the client previews it, so the owner gets what was previewed.
  */
 export function buildStages(paths: CodeFixPath[], taxRateBp: number): { stages: EstimateStageDto[]; totals: EstimateTotals } {
   const stages: EstimateStageDto[] = [];
@@ -56,7 +64,9 @@ export function buildStages(paths: CodeFixPath[], taxRateBp: number): { stages: 
       } else {
         const opening = opens.length ? `Takes apart: ${opens.join('; ')}. ` : '';
         const checks =
-          s.kind === 'check' ? s.causes.map((c) => `${label.get(c) ?? c}: ${info.get(c)?.check?.description ?? 'checked'}`).join(' ') + ' ' : '';
+          s.kind === 'check'
+            ? s.causes.map((c) => sentence(`${label.get(c) ?? c}: ${info.get(c)?.check?.description ?? 'checked'}`)).join(' ') + ' '
+            : '';
         description = `${opening}${checks}Then the verification: clear the code, drive and confirm it stays away${fp.verification.monitor ? ` (${fp.verification.monitor})` : ''}.`;
         if (s.kind === 'check') {
           const open = s.teardowns.reduce((t, g) => t + (fp.input.teardowns[g] ?? 0), 0);

@@ -1,5 +1,5 @@
-import { applyTaxMinor, formatMoney, planFixPath, type FixPathDto, type PlanInput } from '@causeway/shared';
-import { buildStages, toMinor } from './estimate-stages';
+import { applyTaxMinor, formatMoney, planFixPath, type FixPathDto, type PlanInput } from '../src/index';
+import { buildStages, toMinor } from '../src/estimate/stages';
 
 const FUEL = { key: 'fuel-vapour', title: 'Fuel vapour', points: ["Follow the vehicle maker's procedure, local regulations and licensed practice."], sources: [] };
 
