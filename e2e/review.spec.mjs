@@ -46,7 +46,7 @@ async function signIn(page, baseUrl, account) {
 }
 
 export default async function ({ page, baseUrl, shot }) {
-  // A vehicle year no seeded report uses, so this report is told apart on the desk.
+  // A vehicle year no demo report uses, so this report is told apart on the desk.
   const year = String(2010 + (Date.now() % 8));
   const title = `P0303 fixed by Ignition coil (one cylinder) on Morrow Strand 3.0 V6 ${year}`;
 

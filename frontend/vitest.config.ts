@@ -10,7 +10,7 @@ export default mergeConfig(
       include: ['src/**/*.test.{ts,tsx}'],
       css: false,
       // The first test of a file loads antd and the lazy routes from a cold transform cache.
-      testTimeout: 20_000,
+      testTimeout: 60_000,
       restoreMocks: true,
       // Files share loaded modules (antd, the lazy routes) instead of loading them again each:
       // about three times faster. Safe because every test starts clean: its own QueryClient,

@@ -49,7 +49,7 @@ export async function renderApp(url: string, { user = null, api = {} }: RenderAp
 /** Waits until no route or account is loading any more. */
 export async function waitForPageLoaded(): Promise<void> {
   const busy = () => [...screen.queryAllByRole('status'), ...document.querySelectorAll('.ant-spin-spinning')];
-  if (busy().length > 0) await waitForElementToBeRemoved(busy, { timeout: 5000 });
+  if (busy().length > 0) await waitForElementToBeRemoved(busy, { timeout: 30_000 });
 }
 
 /** For a single component that needs the providers and a router but not the whole app. */

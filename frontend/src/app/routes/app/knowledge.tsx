@@ -25,6 +25,7 @@ export function Component() {
         description="Edit the possible causes of each code, the parts and the teardowns directly. Every change is written to the audit log with what it was before."
       />
       <Tabs
+        style={{ minWidth: 0 }}
         activeKey={params.tab}
         onChange={(key) => {
           const tab = KNOWLEDGE_TABS.find((t) => t === key) ?? 'causes';

@@ -242,7 +242,7 @@ export function reportFieldErrorOptions(values: ReportFormValues): FieldErrorOpt
     'payload.code': 'Fault code',
     'payload.codeTitle': 'Title of the code',
     'payload.notes': 'Notes',
-    'payload.make': values.kind === 'confirmed-fix' ? 'Make' : 'Make',
+    'payload.make': 'Make',
     'payload.model': 'Model',
     'payload.engine': 'Engine',
   };

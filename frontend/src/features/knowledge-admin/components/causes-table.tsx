@@ -8,6 +8,7 @@ import { useParts } from '../api/get-parts';
 import { useTeardowns } from '../api/get-teardowns';
 import { describeScope, scopeKeyOf } from '../utils/describe';
 import { CauseFormModal } from './cause-form-modal';
+import { CodeFormModal } from './code-form-modal';
 
 type CausesTableProps = {
   code: string;
@@ -44,6 +45,7 @@ export function CausesTable({ code, page, onCodeChange, onPageChange, locale, cu
   const [editing, setEditing] = useState<PossibleCauseRowDto | null>(null);
   const [open, setOpen] = useState(false);
   const [codeError, setCodeError] = useState<string | null>(null);
+  const [editingCode, setEditingCode] = useState(false);
   const remove = useDeleteCause({ mutationConfig: { onSuccess: () => void message.success('Possible cause removed'), onError: (e) => void message.error(e.message) } });
   const teardownName = new Map((teardowns.data ?? []).map((t) => [t.key, t.name]));
   const rows = [...(causes.data ?? [])].sort((a, b) => a.code.localeCompare(b.code) || scopeKeyOf(a).localeCompare(scopeKeyOf(b)) || b.prior - a.prior);
@@ -55,13 +57,25 @@ export function CausesTable({ code, page, onCodeChange, onPageChange, locale, cu
     { title: 'Prior', key: 'prior', align: 'right', render: (_: unknown, c) => new Intl.NumberFormat(locale, { style: 'percent', maximumFractionDigits: 1 }).format(c.prior) },
     { title: 'Part cost', key: 'cost', align: 'right', render: (_: unknown, c) => formatMoney(c.partCostMinor, c.currency, locale) },
     { title: 'Labour', key: 'hours', align: 'right', render: (_: unknown, c) => `${new Intl.NumberFormat(locale).format(c.replaceHours)} h` },
-    { title: 'Teardown', key: 'teardown', render: (_: unknown, c) => (c.teardownKey ? (teardownName.get(c.teardownKey) ?? c.teardownKey) : '') },
+    {
+      title: 'Teardown',
+      key: 'teardown',
+      render: (_: unknown, c) => {
+        if (!c.teardownKey) return '';
+        const name = teardownName.get(c.teardownKey) ?? c.teardownKey;
+        return (
+          <Typography.Paragraph ellipsis={{ rows: 2, tooltip: name }} style={{ marginBottom: 0, width: 220 }}>
+            {name}
+          </Typography.Paragraph>
+        );
+      },
+    },
     {
       title: 'Check',
       key: 'check',
       render: (_: unknown, c) =>
         c.check ? (
-          <Typography.Paragraph ellipsis={{ rows: 2, tooltip: c.check.description }} style={{ marginBottom: 0, maxWidth: 280 }}>
+          <Typography.Paragraph ellipsis={{ rows: 2, tooltip: c.check.description }} style={{ marginBottom: 0, width: 240 }}>
             {`${c.check.description} (${new Intl.NumberFormat(locale).format(c.check.hours)} h${c.check.mustPrecede ? ', before replacing' : ''})`}
           </Typography.Paragraph>
         ) : (
@@ -128,16 +142,19 @@ export function CausesTable({ code, page, onCodeChange, onPageChange, locale, cu
             </Typography.Text>
           )}
         </div>
-        <Button
-          type="primary"
-          icon={<PlusOutlined aria-hidden />}
-          onClick={() => {
-            setEditing(null);
-            setOpen(true);
-          }}
-        >
-          Add possible cause
-        </Button>
+        <Flex gap={12} wrap>
+          {code && <Button onClick={() => setEditingCode(true)}>Edit {code}&apos;s catalogue entry</Button>}
+          <Button
+            type="primary"
+            icon={<PlusOutlined aria-hidden />}
+            onClick={() => {
+              setEditing(null);
+              setOpen(true);
+            }}
+          >
+            Add possible cause
+          </Button>
+        </Flex>
       </Flex>
       {causes.isError && <Alert type="error" showIcon title={causes.error.message} style={{ marginBottom: 16 }} />}
       {code && rows.length > 0 && (
@@ -162,6 +179,7 @@ export function CausesTable({ code, page, onCodeChange, onPageChange, locale, cu
         locale={{ emptyText: code ? `${code} has no possible causes yet` : 'No possible causes' }}
         pagination={{ current: page, pageSize: 25, showSizeChanger: false, onChange: onPageChange, showTotal: (total) => `${total} possible ${total === 1 ? 'cause' : 'causes'}` }}
       />
+      {code && <CodeFormModal code={code} open={editingCode} onClose={() => setEditingCode(false)} />}
       <CauseFormModal
         key={editing?.id ?? `new-${code}`}
         cause={editing}

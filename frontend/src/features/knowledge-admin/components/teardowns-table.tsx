@@ -17,7 +17,7 @@ export function TeardownsTable({ q, page, onQueryChange, onPageChange, locale }:
   const rows = all.filter((t) => !needle || t.name.toLowerCase().includes(needle) || t.key.includes(needle)).sort((a, b) => a.name.localeCompare(b.name));
   const knownCautions = [...new Set(all.flatMap((t) => t.cautions))].sort();
   const columns: TableColumnsType<TeardownDto> = [
-    { title: 'Name', key: 'name', render: (_: unknown, t) => t.name },
+    { title: 'Name', key: 'name', render: (_: unknown, t) => <div style={{ maxWidth: 380 }}>{t.name}</div> },
     { title: 'Key', key: 'key', render: (_: unknown, t) => <Typography.Text code>{t.key}</Typography.Text> },
     { title: 'Hours', key: 'hours', align: 'right', render: (_: unknown, t) => `${new Intl.NumberFormat(locale).format(t.hours)} h` },
     { title: 'Vehicles', key: 'scope', render: (_: unknown, t) => describeScope(t) },
