@@ -3,7 +3,7 @@ import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
 
 // Lazy routes load real modules; on a cold cache that can take longer than the default second.
-configure({ asyncUtilTimeout: 5000 });
+configure({ asyncUtilTimeout: 15_000 });
 
 // Files that opt into the node environment (pure logic) have no window to patch.
 if (typeof window !== 'undefined') {
