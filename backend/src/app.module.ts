@@ -4,6 +4,7 @@ import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
 import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
@@ -16,6 +17,9 @@ import { RolesGuard } from './common/guards/roles.guard';
 import { appConfig, authConfig, mailConfig, type AppConfig } from './config/configuration';
 import { validateEnv } from './config/env.validation';
 import { dataSourceOptions } from './database/data-source';
+import { DatabaseThrottlerStorage, throttleInDatabase } from './database/db-throttler-storage';
+import { initializeAndMigrate } from './database/startup-lock';
+import { DatabaseModule } from './database/database.module';
 import { HealthController } from './health/health.controller';
 import { KnowledgeModule } from './knowledge/knowledge.module';
 import { EstimatesModule } from './estimates/estimates.module';
@@ -52,10 +56,20 @@ function clientModules(): Array<DynamicModule | Type> {
       }),
     }),
     TypeOrmModule.forRootAsync({
-      useFactory: () => ({ ...dataSourceOptions(), autoLoadEntities: true, migrationsRun: true }),
+      useFactory: () => ({ ...dataSourceOptions(), autoLoadEntities: true }),
+      // Pending migrations run at start, one instance at a time (database/startup-lock.ts).
+      dataSourceFactory: (options) => initializeAndMigrate(options!),
     }),
-    ThrottlerModule.forRoot([{ name: 'default', ttl: 60_000, limit: () => Number(process.env.THROTTLE_LIMIT ?? 6000) }]),
+    // Counts live in the database when several instances may share it (PostgreSQL), else in memory.
+    ThrottlerModule.forRootAsync({
+      inject: [DataSource],
+      useFactory: (dataSource: DataSource) => ({
+        throttlers: [{ name: 'default', ttl: 60_000, limit: () => Number(process.env.THROTTLE_LIMIT ?? 6000) }],
+        storage: throttleInDatabase() ? new DatabaseThrottlerStorage(dataSource) : undefined,
+      }),
+    }),
     ...clientModules(),
+    DatabaseModule,
     CacheModule,
     ShopsModule,
     AuthModule,

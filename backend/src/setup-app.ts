@@ -4,6 +4,7 @@ import { json, type NextFunction, type Request, type Response } from 'express';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { validationPipeOptions } from './common/validation';
+import { refuseNul } from './database/nul-guard';
 
 /** Body-parser failures answered in the one error shape, naming the body as the field. */
 function bodyErrors(err: { type?: string; status?: number } | undefined, _req: Request, res: Response, next: NextFunction): void {
@@ -19,12 +20,39 @@ function bodyErrors(err: { type?: string; status?: number } | undefined, _req: R
 }
 
 /**
+ * JSON nested deeper than any request here needs is refused before class-transformer recurses
+ * through it (a few thousand levels overflow its stack: a 500). RFC 8259 §9 lets a parser limit
+ * the depth of nesting.
+ */
+export const MAX_JSON_DEPTH = 32;
+
+function nestedDeeperThan(value: unknown, max: number): boolean {
+  const stack: Array<[unknown, number]> = [[value, 0]];
+  while (stack.length > 0) {
+    const [v, depth] = stack.pop()!;
+    if (v === null || typeof v !== 'object') continue;
+    if (depth >= max) return true;
+    for (const child of Object.values(v)) stack.push([child, depth + 1]);
+  }
+  return false;
+}
+
+function bodyDepth(req: Request, res: Response, next: NextFunction): void {
+  if (req.body !== null && typeof req.body === 'object' && nestedDeeperThan(req.body, MAX_JSON_DEPTH)) {
+    res.status(400).json({ statusCode: 400, error: 'Bad Request', message: `The request body is nested more than ${MAX_JSON_DEPTH} levels deep`, errors: [{ field: 'body', message: `is nested more than ${MAX_JSON_DEPTH} levels deep` }] });
+  } else {
+    next();
+  }
+}
+
+/**
  * Everything main.ts does to the app besides listening; e2e specs call it too.
  * The app must be created with `bodyParser: false`: JSON parsing is set up here.
  */
 export function setupApp(app: INestApplication): INestApplication {
   app.useLogger(app.get(Logger));
-  app.use(json({ limit: '1mb' }), bodyErrors);
+  app.use(json({ limit: '1mb' }), bodyErrors, bodyDepth);
+  app.use(refuseNul);
   app.setGlobalPrefix('api', { exclude: [] });
   app.use(
     helmet({

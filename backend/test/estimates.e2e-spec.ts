@@ -1,5 +1,4 @@
 import { createHash } from 'node:crypto';
-import { DataSource } from 'typeorm';
 import type { AuthResponse, CreateEstimateResponse, JobDto, PublicEstimateDto, VehicleDto } from '@causeway/shared';
 import { closedPort, startMailCatcher, type MailCatcher } from './utils/mail-catcher';
 import { bearer, createTestApp, KESTREL_SHOP, registerMember, registerOwner, type TestApp } from './utils/test-app';
@@ -59,7 +58,7 @@ describe('staged estimates by e-mail (e2e, real SMTP to a local mail catcher)', 
     expect(days).toBeCloseTo(14, 2);
     // The link goes out once; the database keeps only its SHA-256 hash.
     token = TOKEN_IN_LINK.exec(created.link)![1];
-    const rows = await t.app.get(DataSource).query('SELECT * FROM estimates WHERE id = ?', [e.id]);
+    const rows = await t.query('SELECT * FROM estimates WHERE id = ?', [e.id]);
     expect(rows[0].tokenHash).toBe(createHash('sha256').update(token).digest('hex'));
     expect(JSON.stringify(rows)).not.toContain(token);
   });
@@ -113,7 +112,7 @@ describe('staged estimates by e-mail (e2e, real SMTP to a local mail catcher)', 
   it('an unknown link is a 404 and an expired one a 410 with a clear message', async () => {
     await t.http().get(`/api/public/estimates/${'A'.repeat(43)}`).expect(404);
     await t.http().get('/api/public/estimates/short').expect(404);
-    await t.app.get(DataSource).query('UPDATE estimates SET expiresAt = ? WHERE id = ?', ['2026-01-02 10:00:00.000', created.estimate.id]);
+    await t.query('UPDATE estimates SET "expiresAt" = ? WHERE id = ?', ['2026-01-02 10:00:00.000', created.estimate.id]);
     const res = await t.http().get(`/api/public/estimates/${token}`).expect(410);
     expect(res.body.message).toBe('This estimate link expired on 2 January 2026. Please ask Test Garage to send a new one.');
     await t.http().post(`/api/public/estimates/${token}/answers`).send({ stageIndex: 0, decision: 'declined' }).expect(410);

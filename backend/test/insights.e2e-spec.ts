@@ -1,6 +1,5 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { DataSource } from 'typeorm';
 import type { InsightsDto, JobDto, JobSummaryDto } from '@causeway/shared';
 import { DEMO_PASSWORD } from '../src/seed/demo-accounts.seeder';
 import { bearer, createTestApp, registerMember, registerOwner, type TestApp } from './utils/test-app';
@@ -83,11 +82,10 @@ describe('shop insights (e2e)', () => {
 
   describe('the demo outcomes', () => {
     it('belong to their demo jobs and are counted once', async () => {
-      const ds = t.app.get(DataSource);
-      const unlinked = await ds.query("SELECT COUNT(*) AS n FROM outcomes WHERE source = 'job' AND sourceId IS NULL");
+      const unlinked = await t.query<{ n: number | string }>(`SELECT COUNT(*) AS n FROM outcomes WHERE source = 'job' AND "sourceId" IS NULL`);
       expect(Number(unlinked[0].n)).toBe(0);
       // One outcome per resolved demo job and code that a replaced part is a possible cause of; the coil and plug job splits one outcome in two rows.
-      const rows: Array<{ sourceId: string; code: string; weight: number }> = await ds.query("SELECT sourceId, code, weight FROM outcomes WHERE source = 'job'");
+      const rows: Array<{ sourceId: string; code: string; weight: number }> = await t.query(`SELECT "sourceId", code, weight FROM outcomes WHERE source = 'job'`);
       const perOutcome = new Map<string, number>();
       for (const r of rows) perOutcome.set(`${r.sourceId}|${r.code}`, (perOutcome.get(`${r.sourceId}|${r.code}`) ?? 0) + r.weight);
       for (const total of perOutcome.values()) expect(total).toBeCloseTo(1, 12);

@@ -1,4 +1,3 @@
-import { DataSource } from 'typeorm';
 import type { AuditEntryDto, AuthResponse, CauseRankingDto, FieldReportDto, FieldReportSummaryDto, LikelihoodDto, Page, PossibleCauseRowDto, ReviewReportDto, VehicleScopeQuery } from '@causeway/shared';
 import { AuditService } from '../src/audit/audit.service';
 import { MailService } from '../src/mail/mail.service';
@@ -68,7 +67,6 @@ describe('review desk (e2e)', () => {
   let technician: string;
   let admin: string;
   let secondModerator: AuthResponse;
-  let db: DataSource;
 
   const login = async (email: string) => (await t.http().post('/api/auth/login').send({ email, password: DEMO_PASSWORD }).expect(200)).body.accessToken as string;
   const queue = async (query: Record<string, string | number> = {}) => (await t.http().get('/api/review/reports').query(query).set(...bearer(moderator)).expect(200)).body as Page<FieldReportSummaryDto>;
@@ -76,7 +74,7 @@ describe('review desk (e2e)', () => {
   const ranking = async (code: string, vehicle: VehicleScopeQuery) => (await t.http().get(`/api/codes/${code}/causes`).query({ ...vehicle }).set(...bearer(contributor)).expect(200)).body as CauseRankingDto;
   const causeRows = async (code: string) => (await t.http().get('/api/causes').query({ code }).set(...bearer(contributor)).expect(200)).body as PossibleCauseRowDto[];
   const auditOf = async (entityId: string) => (await t.http().get('/api/admin/audit').query({ entityId, pageSize: 100 }).set(...bearer(admin)).expect(200)).body as Page<AuditEntryDto>;
-  const outcomesOf = async (reportId: string) => (await db.query('SELECT causeKey, weight FROM outcomes WHERE sourceId = ?', [reportId])) as Array<{ causeKey: string | null; weight: number }>;
+  const outcomesOf = async (reportId: string) => (await t.query('SELECT "causeKey", weight FROM outcomes WHERE "sourceId" = ?', [reportId])) as Array<{ causeKey: string | null; weight: number }>;
   const seeded = async (kind: string, code: string) => (await queue({ kind, code })).items[0];
   const fileFix = async (payload: Record<string, unknown>, who = contributor) =>
     (await t.http().post('/api/field-reports').set(...bearer(who)).send({ kind: 'confirmed-fix', payload, submit: true }).expect(201)).body as FieldReportDto;
@@ -84,7 +82,6 @@ describe('review desk (e2e)', () => {
   beforeAll(async () => {
     mail = await startInbox();
     t = await createTestApp({ SEED_DEMO: 'true', SMTP_HOST: '127.0.0.1', SMTP_PORT: String(mail.port) });
-    db = t.app.get(DataSource);
     [contributor, moderator, technician, admin] = await Promise.all(['contributor@causeway.test', 'moderator@causeway.test', 'technician@causeway.test', 'admin@causeway.test'].map(login));
     secondModerator = await registerOwner(t);
     await setRole(t, secondModerator.user.id, 'moderator');

@@ -2,7 +2,6 @@ import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { deflateSync } from 'node:zlib';
 import sharp from 'sharp';
-import { DataSource } from 'typeorm';
 import type { AttachmentDto, AuthResponse, FieldReportDto } from '@causeway/shared';
 import { bearer, createTestApp, registerMember, registerOwner, setRole, type TestApp } from './utils/test-app';
 
@@ -25,7 +24,7 @@ describe('field report uploads (e2e)', () => {
 
   const uploadsDir = () => join(t.dataDir, 'uploads');
   const stored = () => readdirSync(uploadsDir()).sort();
-  const attachmentRows = async () => Number((await t.app.get(DataSource).query('SELECT COUNT(*) AS n FROM field_report_attachments'))[0].n);
+  const attachmentRows = async () => Number((await t.query<{ n: number | string }>('SELECT COUNT(*) AS n FROM field_report_attachments'))[0].n);
 
   const draft = async (who: AuthResponse = contributor): Promise<FieldReportDto> =>
     (

@@ -1,5 +1,6 @@
-import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, HttpCode, Post, Res } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
+import type { Response } from 'express';
 import { Throttle } from '@nestjs/throttler';
 import type { AuthResponse, UserDto } from '@causeway/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -8,6 +9,7 @@ import { AUTH_THROTTLE } from './auth-throttle';
 import type { AuthUser } from './auth-user';
 import { AuthService } from './auth.service';
 import { ChangePasswordDto, LoginDto, RegisterDto } from './dto/auth.dto';
+import { SignInLockedException } from './sign-in-lockout';
 
 @ApiTags('auth')
 @Controller()
@@ -25,8 +27,14 @@ export class AuthController {
   @Throttle(AUTH_THROTTLE)
   @HttpCode(200)
   @Post('auth/login')
-  login(@Body() dto: LoginDto): Promise<AuthResponse> {
-    return this.auth.login(dto);
+  @ApiTooManyRequestsResponse({ description: 'Too many failed sign-ins for this e-mail address (known or not); Retry-After gives the seconds to wait' })
+  async login(@Body() dto: LoginDto, @Res({ passthrough: true }) res: Response): Promise<AuthResponse> {
+    try {
+      return await this.auth.login(dto);
+    } catch (err) {
+      if (err instanceof SignInLockedException) res.setHeader('Retry-After', String(err.retryAfterSeconds));
+      throw err;
+    }
   }
 
   @ApiBearerAuth()

@@ -7,12 +7,14 @@ import { authConfig, type AuthConfig } from '../config/configuration';
 import { User } from '../users/entities/user.entity';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
+import { SignInFailure } from './entities/sign-in-failure.entity';
 import { JwtStrategy } from './jwt.strategy';
+import { SignInLockout } from './sign-in-lockout';
 
 @Module({
   imports: [
     PassportModule,
-    TypeOrmModule.forFeature([User]),
+    TypeOrmModule.forFeature([User, SignInFailure]),
     JwtModule.registerAsync({
       imports: [ConfigModule.forFeature(authConfig)],
       inject: [authConfig.KEY],
@@ -20,7 +22,7 @@ import { JwtStrategy } from './jwt.strategy';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy],
+  providers: [AuthService, JwtStrategy, SignInLockout],
   exports: [AuthService],
 })
 export class AuthModule {}

@@ -12,6 +12,7 @@ import { User } from '../users/entities/user.entity';
 import { toUserDto } from '../users/users.mapper';
 import type { JwtPayload } from './auth-user';
 import type { ChangePasswordDto, LoginDto, RegisterDto } from './dto/auth.dto';
+import { SignInLockout } from './sign-in-lockout';
 
 const SIGN_IN_FAILED = 'The e-mail address or password is not right';
 
@@ -25,6 +26,7 @@ export class AuthService {
     @InjectRepository(User) private readonly users: Repository<User>,
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly jwt: JwtService,
+    private readonly lockout: SignInLockout,
   ) {
     this.dummyHash = bcrypt.hashSync('causeway-timing-equaliser', config.bcryptRounds);
   }
@@ -66,10 +68,19 @@ export class AuthService {
     return this.issue(await this.loadUser(userId));
   }
 
+  /**
+   * Known and unknown addresses take the same path (lockout check, a bcrypt comparison, the
+   * failure recorded), so neither the answer nor its time tells whether an account exists.
+   */
   async login(dto: LoginDto): Promise<AuthResponse> {
+    await this.lockout.begin(dto.email);
     const user = await this.users.findOne({ where: { emailNormalized: dto.email.toLowerCase() }, select: { id: true, passwordHash: true, disabled: true } });
     const ok = await bcrypt.compare(dto.password, user?.passwordHash ?? this.dummyHash);
-    if (!user || !ok) throw new UnauthorizedException(SIGN_IN_FAILED);
+    if (!user || !ok) {
+      await this.lockout.failed();
+      throw new UnauthorizedException(SIGN_IN_FAILED);
+    }
+    await this.lockout.succeeded(dto.email);
     if (user.disabled) throw new ForbiddenException('This account is disabled; ask an administrator');
     return this.issue(await this.loadUser(user.id));
   }

@@ -5,9 +5,11 @@ import type { FieldError } from '@causeway/shared';
 export function flattenValidationErrors(errors: ValidationError[], parent = ''): FieldError[] {
   const out: FieldError[] = [];
   for (const error of errors) {
-    const field = parent ? `${parent}.${error.property}` : error.property;
+    // A parameter sent with an empty name ("?=x", {"": 1}) still gets a field to be named by.
+    const property = error.property === '' ? '(empty name)' : error.property;
+    const field = parent ? `${parent}.${property}` : property;
     for (const message of Object.values(error.constraints ?? {})) {
-      out.push({ field, message: message.replace(/^property (\S+) should not exist$/, 'is not an accepted field') });
+      out.push({ field, message: message.replace(/^property (\S*) should not exist$/, 'is not an accepted field') });
     }
     if (error.children?.length) out.push(...flattenValidationErrors(error.children, field));
   }

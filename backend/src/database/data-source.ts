@@ -12,7 +12,21 @@ export function dataSourceOptions(env: NodeJS.ProcessEnv = process.env): DataSou
   const url = env.DATABASE_URL;
   const common = { migrations, migrationsRun: false, synchronize: false, logging: false } as const;
   if (url?.startsWith('postgres')) {
-    return { type: 'postgres', url, ...common };
+    return {
+      type: 'postgres',
+      url,
+      ...common,
+      // New ids come from gen_random_uuid(), built into PostgreSQL 13+: no extension to install.
+      uuidExtension: 'pgcrypto',
+      installExtensions: false,
+      extra: {
+        // Connections per instance (PG_POOL_MAX); several instances share the server's max_connections.
+        max: Number(env.PG_POOL_MAX ?? 10),
+        // Sessions in UTC, as the embedded database keeps times: a date-time written as text
+        // without an offset means the same instant on both engines, whatever the server's zone.
+        options: '-c TimeZone=UTC',
+      },
+    };
   }
   const database = env.DATABASE_FILE ?? join(resolveDataDir(env), 'causeway.sqlite');
   return {

@@ -2,7 +2,7 @@ import { BadRequestException, ConflictException, Injectable, InternalServerError
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { setImmediate as yieldToEventLoop } from 'node:timers/promises';
-import { DataSource, Repository, type EntityTarget } from 'typeorm';
+import { DataSource, In, Repository, type EntityTarget } from 'typeorm';
 import {
   IMPORT_LIMITS,
   IMPORT_REQUIRED_FIELDS,
@@ -19,6 +19,7 @@ import {
 } from '@causeway/shared';
 import type { AuthUser } from '../auth/auth-user';
 import { validationFailed } from '../common/validation';
+import { RunLeases } from '../database/run-leases';
 import { ShopsService } from '../shops/shops.service';
 import { JobCode } from '../jobs/entities/job-code.entity';
 import { Job } from '../jobs/entities/job.entity';
@@ -32,6 +33,7 @@ import { ImportMappingEntity } from './entities/import-mapping.entity';
 import { importLimits } from './import-limits';
 import { RowChecker, type NormalRow } from './rows';
 import { ImportTransactions } from './transaction';
+import { uuid7 } from './uuid7';
 import { WRITTEN_COLUMNS, dbTime, writeRows, type SqlOp, type WriteResult } from './writer';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -74,16 +76,24 @@ export class ImportsService implements OnModuleInit {
     @InjectRepository(CsvImport) private readonly imports: Repository<CsvImport>,
     @InjectRepository(ImportMappingEntity) private readonly mappings: Repository<ImportMappingEntity>,
     private readonly shops: ShopsService,
+    private readonly leases: RunLeases,
   ) {
     this.tx = new ImportTransactions(dataSource);
   }
 
   async onModuleInit(): Promise<void> {
-    // An import still 'running' at start-up was cut off by a stop of the server: its one transaction never committed.
-    await this.imports.update(
-      { status: 'running' },
-      { status: 'interrupted', phase: 'done', finishedAt: new Date(), message: 'The server stopped while this import ran; none of its rows were written. Upload the file again.' },
-    );
+    // An import still 'running' at start-up whose lease no instance holds was cut off by a stop of its server: its one
+    // transaction never committed. (On PostgreSQL another instance may be running it right now: database/run-leases.ts.)
+    // Its phase is kept: it says whether the stop came while reading or in the middle of writing.
+    const running = await this.imports.find({ select: { id: true }, where: { status: 'running' } });
+    const abandoned: string[] = [];
+    for (const r of running) if (await this.leases.abandoned(`import:${r.id}`)) abandoned.push(r.id);
+    if (abandoned.length) {
+      await this.imports.update(
+        { id: In(abandoned), status: 'running' },
+        { status: 'interrupted', finishedAt: new Date(), message: 'The server stopped while this import ran; none of its rows were written. Upload the file again.' },
+      );
+    }
     this.schemaProblem = this.checkWrittenTables();
     if (this.schemaProblem) this.logger.error(this.schemaProblem);
   }
@@ -150,6 +160,7 @@ export class ImportsService implements OnModuleInit {
     const layout = detectLayout(sampleText(buf, shape.offset));
     const records = readRecords(buf, shape.offset, layout.delimiter, layout.lineEnding);
     let importRow: CsvImport | null = null;
+    let releaseLease = async (): Promise<void> => undefined;
     try {
       // Header: the first line that is not blank; the rest of its batch are data rows.
       let header: CsvRecord | null = null;
@@ -181,9 +192,11 @@ export class ImportsService implements OnModuleInit {
         IMPORT_LIMITS.previewRows,
       );
 
-      if (!q.dryRun) importRow = await this.startImport(q.id, shop.id, user.id, file, q.validOnly);
+      if (!q.dryRun) {
+        importRow = await this.startImport(q.id, shop.id, user.id, file, q.validOnly);
+        releaseLease = await this.leases.hold(`import:${importRow.id}`);
+      }
 
-      const T0 = Date.now();
       const valid: NormalRow[] = [];
       let rows = 0;
       let lastProgress = Date.now();
@@ -209,7 +222,6 @@ export class ImportsService implements OnModuleInit {
       }
       if (rows === 0) throw new FileProblem('has a header line but no data rows');
 
-      console.error('TIMING read+check', Date.now() - T0);
       const rejected = rows - valid.length;
       const refused = !q.validOnly && rejected > 0;
       const report: ImportReport = {
@@ -261,7 +273,6 @@ export class ImportsService implements OnModuleInit {
       }
       await this.imports.update({ id }, { phase: 'writing', bytesProcessed: buf.length, rowsProcessed: rows });
       await yieldToEventLoop();
-      const T1 = Date.now();
       await this.tx.run(
         writeRows({ ...ctx, importId: id }, valid, modelYearOf),
         (result) => {
@@ -278,7 +289,6 @@ export class ImportsService implements OnModuleInit {
         },
         false,
       );
-      console.error('TIMING write', Date.now() - T1);
       return report;
     } catch (err) {
       const problem = err instanceof FileProblem ? err : null;
@@ -290,6 +300,7 @@ export class ImportsService implements OnModuleInit {
       if (isUniqueViolation(err)) throw new ConflictException('Another import wrote some of these rows at the same moment; nothing of this one was written. Upload it again.');
       throw err;
     } finally {
+      await releaseLease();
       await records.return(undefined);
     }
   }
@@ -313,7 +324,9 @@ export class ImportsService implements OnModuleInit {
       throw new ConflictException({ statusCode: 409, error: 'Conflict', message: 'id: is already the id of an import', errors: [{ field: 'id', message: 'is already the id of an import; choose a new UUID' }] });
     }
     const row = this.imports.create({
-      ...(id ? { id } : {}),
+      // Time-ordered unless the client chose one; createdAt to the millisecond, so that the history's order is the upload order.
+      id: id ?? uuid7(),
+      createdAt: new Date(),
       shopId,
       createdById: userId,
       fileName: cleanFileName(file.originalname),
@@ -338,7 +351,7 @@ export class ImportsService implements OnModuleInit {
       where: { shopId: shop.id, ...(q.status ? { status: q.status } : {}) },
       relations: { createdBy: true },
       select: this.summaryColumns(),
-      order: { createdAt: 'DESC', id: 'ASC' },
+      order: { createdAt: 'DESC', id: 'DESC' },
       skip: (q.page - 1) * q.pageSize,
       take: q.pageSize,
     });

@@ -13,7 +13,7 @@ import {
   type ImportRowProblem,
   type VinResult,
 } from '@causeway/shared';
-import type { ResolvedColumns } from './csv/mapping';
+import { unitWord, type ResolvedColumns } from './csv/mapping';
 import { MAX_ODOMETER_KM, freezeValue, parseOdometer, parseScanDate, parseStatus, type Parsed, type ScanTime } from './csv/values';
 
 /** A row that passed every check, in the form it is stored. */
@@ -29,8 +29,6 @@ export interface NormalRow {
   /** With the failure-type byte when one was read. */
   display: string;
   status: CodeStatus;
-  description: string | null;
-  freezeFrame: FreezeFrame;
   /** The freeze frame as stored: JSON with the keys in a fixed order. */
   freezeFrameJson: string;
   make: string | null;
@@ -78,9 +76,10 @@ export class RowChecker {
   private readonly vinReported = new Set<string>();
   private readonly dateCache = new Map<string, Parsed<ScanTime>>();
   private readonly statusCache = new Map<string, Parsed<CodeStatus>>();
-  private readonly odometerCache = new Map<string, ReturnType<typeof parseOdometer>>();
-  /** Freeze-frame columns in key order, so that equal frames give equal JSON (and hashes). */
-  private readonly freezeColumns: Array<{ index: number; key: string; header: string }>;
+  /** One string per distinct module name, so that 100 000 rows do not hold 100 000 copies. */
+  private readonly moduleNames = new Map<string, string>();
+  /** Freeze-frame columns in key order, so that equal frames give equal JSON (and hashes); `prefix` is the key as JSON. */
+  private readonly freezeColumns: Array<{ index: number; key: string; header: string; prefix: string }>;
 
   constructor(
     private readonly opts: RowCheckerOptions,
@@ -90,7 +89,10 @@ export class RowChecker {
     this.index = opts.resolved.index;
     this.header = opts.resolved.header;
     this.order = opts.mapping.dateOrder ?? (opts.locale.toLowerCase() === 'en-us' ? 'MDY' : 'DMY');
-    this.freezeColumns = [...opts.resolved.freezeFrame].sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
+    // One column per key (the first wins), in key order.
+    const byKey = new Map<string, { index: number; key: string; header: string }>();
+    for (const ff of opts.resolved.freezeFrame) if (!byKey.has(ff.key)) byKey.set(ff.key, ff);
+    this.freezeColumns = [...byKey.values()].sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0)).map((ff) => ({ ...ff, prefix: `${JSON.stringify(ff.key)}:` }));
   }
 
   private problem(line: number, column: string, message: string, severity: 'error' | 'warning' = 'error'): void {
@@ -205,25 +207,30 @@ export class RowChecker {
     let odometerKm: number | null = null;
     const rawOdo = this.cell(cells, 'odometer');
     if (rawOdo !== '') {
-      let parsed = this.odometerCache.get(rawOdo);
-      if (!parsed) {
-        parsed = parseOdometer(rawOdo);
-        if (this.odometerCache.size < 50_000) this.odometerCache.set(rawOdo, parsed);
-      }
+      const parsed = parseOdometer(rawOdo);
       if (!parsed.ok) {
         err('odometer', parsed.message);
       } else {
         const rawUnit = this.cell(cells, 'odometerUnit');
         let unit = parsed.value.unit;
+        let unitOk = true;
         if (rawUnit !== '') {
-          const u = /^(km|kms|kilomet(?:re|er)s?|mi|miles?)\.?$/i.exec(rawUnit) ? (rawUnit.toLowerCase().startsWith('m') ? 'mi' : 'km') : null;
-          if (!u) err('odometerUnit', `"${rawUnit.slice(0, 20)}" is not a distance unit (km or mi)`);
-          else if (unit && unit !== u) err('odometer', `says ${unit} but the unit column says ${u}`);
-          else unit = u;
+          const u = unitWord(rawUnit);
+          if (!u) {
+            unitOk = false;
+            err('odometerUnit', `"${rawUnit.slice(0, 20)}" is not a distance unit (km or mi)`);
+          } else if (unit && unit !== u) {
+            unitOk = false;
+            err('odometer', `says ${unit} but the unit column says ${u}`);
+          } else {
+            unit = u;
+          }
         }
-        const km = toKm(parsed.value.value, unit ?? this.opts.mapping.odometerUnit ?? this.opts.distanceUnit);
-        if (km > MAX_ODOMETER_KM) err('odometer', `${rawOdo} is beyond ${MAX_ODOMETER_KM.toLocaleString('en-GB')} km, more than any vehicle runs`);
-        else odometerKm = Math.round(km * 1000) / 1000;
+        if (unitOk) {
+          const km = toKm(parsed.value.value, unit ?? this.opts.mapping.odometerUnit ?? this.opts.distanceUnit);
+          if (km > MAX_ODOMETER_KM) err('odometer', `${rawOdo} is beyond ${MAX_ODOMETER_KM.toLocaleString('en-GB')} km, more than any vehicle runs`);
+          else odometerKm = km;
+        }
       }
     }
 
@@ -238,7 +245,12 @@ export class RowChecker {
       }
       return v;
     };
-    const module = text('module');
+    let module = text('module');
+    if (module !== null) {
+      const known = this.moduleNames.get(module);
+      if (known !== undefined) module = known;
+      else if (this.moduleNames.size < 1000) this.moduleNames.set(module, module);
+    }
     const description = text('description');
     const make = text('make');
     const model = text('model');
@@ -253,14 +265,21 @@ export class RowChecker {
       else year = y;
     }
 
-    // Freeze frame
+    // Freeze frame, and its JSON written directly (keys in a fixed order: equal frames, equal text).
     const freezeFrame: FreezeFrame = {};
+    let freezeFrameJson = '{';
     for (const ff of this.freezeColumns) {
       const v = (cells[ff.index] ?? '').trim();
       if (v === '') continue;
-      if (v.length > FREEZE_VALUE_MAX) err('freezeFrame', `is longer than ${FREEZE_VALUE_MAX} characters`, ff.header);
-      else freezeFrame[ff.key] = freezeValue(v, this.opts.delimiter === ',');
+      if (v.length > FREEZE_VALUE_MAX) {
+        err('freezeFrame', `is longer than ${FREEZE_VALUE_MAX} characters`, ff.header);
+        continue;
+      }
+      const value = freezeValue(v, this.opts.delimiter === ',');
+      freezeFrame[ff.key] = value;
+      freezeFrameJson += `${freezeFrameJson.length > 1 ? ',' : ''}${ff.prefix}${typeof value === 'number' ? String(value) : JSON.stringify(value)}`;
     }
+    freezeFrameJson += '}';
 
     const valid = errors === 0 && vin !== null && code !== null && display !== null && scan !== null && status !== null;
     if (this.preview.length < this.previewRows) {
@@ -285,7 +304,6 @@ export class RowChecker {
       if (this.problemsTotal === before) this.problem(line, 'row', 'could not be read');
       return null;
     }
-    const freezeFrameJson = JSON.stringify(freezeFrame);
     const hash = digest('sha256', `${vin}\u0001${scan!.instant}\u0001${display}\u0001${status}\u0001${odometerKm ?? ''}\u0001${module ?? ''}\u0001${description ?? ''}\u0001${freezeFrameJson}`, 'base64url');
     return {
       line,
@@ -297,8 +315,6 @@ export class RowChecker {
       code: code!,
       display: display!,
       status: status!,
-      description,
-      freezeFrame,
       freezeFrameJson,
       make,
       model,

@@ -13,6 +13,16 @@ interface SqliteHandle {
   readonly inTransaction: boolean;
 }
 
+const DB_TIME = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}\.\d{3}$/;
+
+/**
+ * On PostgreSQL, instants go in as Date objects, exactly as TypeORM writes them (the program's
+ * UTC text form would be read in the server's time zone instead).
+ */
+function pgParam(v: string | number | null): unknown {
+  return typeof v === 'string' && DB_TIME.test(v) ? new Date(`${v.replace(' ', 'T')}Z`) : v;
+}
+
 function pgSql(sql: string): string {
   let n = 0;
   return sql.replace(/\?/g, () => `$${++n}`);
@@ -89,7 +99,7 @@ export class ImportTransactions {
     await qr.connect();
     await qr.startTransaction();
     const exec = async (op: SqlOp): Promise<unknown> => {
-      const rows = (await qr.query(pgSql(op.sql), op.params)) as Row[];
+      const rows = (await qr.query(pgSql(op.sql), op.params.map(pgParam))) as Row[];
       if (op.kind === 'get') return rows[0];
       if (op.kind === 'all') return rows;
       return undefined;

@@ -14,20 +14,18 @@ function fieldError(field: string, message: string): BadRequestException {
  */
 @Injectable()
 export class ImportUploadInterceptor implements NestInterceptor {
-  private readonly upload = multer({
-    storage: multer.memoryStorage(),
-    limits: { fileSize: importLimits().maxBytes, files: 1, fields: 4, fieldSize: 64 * 1024, parts: 6 },
-  }).single('file');
-
   async intercept(context: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
     const http = context.switchToHttp();
     const req = http.getRequest<Request>();
     const res = http.getResponse<Response>();
+    const { maxBytes } = importLimits();
+    // File names without an explicit charset are read as UTF-8 (browsers send them so), not Latin-1.
+    const upload = multer({ storage: multer.memoryStorage(), defParamCharset: 'utf8', limits: { fileSize: maxBytes, files: 1, fields: 4, fieldSize: 64 * 1024, parts: 6 } }).single('file');
     await new Promise<void>((resolve, reject) => {
-      this.upload(req, res, (err: unknown) => {
+      upload(req, res, (err: unknown) => {
         if (!err) return resolve();
         const e = err as { code?: string; field?: string; message?: string };
-        const mb = Math.round(importLimits().maxBytes / (1024 * 1024));
+        const mb = +(maxBytes / (1024 * 1024)).toFixed(2);
         switch (e.code) {
           case 'LIMIT_FILE_SIZE':
             return reject(new PayloadTooLargeException({ statusCode: 413, error: 'Payload Too Large', message: `file: is larger than ${mb} MB, the limit for one import; split it into smaller files`, errors: [{ field: 'file', message: `is larger than ${mb} MB, the limit for one import` }] }));

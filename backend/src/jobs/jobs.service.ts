@@ -187,7 +187,8 @@ export class JobsService {
     if (errors.length) throw validationFailed(errors);
     if (from) qb.andWhere('j.openedAt >= :from', { from });
     if (to) qb.andWhere('j.openedAt <= :to', { to });
-    qb.orderBy(JOB_SORT_COLUMNS[q.sort], q.order === 'asc' ? 'ASC' : 'DESC');
+    // Empty values last in both directions, on SQLite and PostgreSQL alike (their defaults differ).
+    qb.orderBy(JOB_SORT_COLUMNS[q.sort], q.order === 'asc' ? 'ASC' : 'DESC', 'NULLS LAST');
     if (q.sort !== 'openedAt') qb.addOrderBy('j.openedAt', 'DESC');
     qb.addOrderBy('j.id', 'ASC');
     qb.skip((q.page - 1) * q.pageSize).take(q.pageSize);

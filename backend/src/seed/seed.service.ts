@@ -2,6 +2,7 @@ import { Inject, Injectable, Logger, type OnApplicationBootstrap } from '@nestjs
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { appConfig, type AppConfig } from '../config/configuration';
+import { withStartupLock } from '../database/startup-lock';
 import { DtcCode } from '../codes/entities/dtc-code.entity';
 import { User } from '../users/entities/user.entity';
 import { CatalogueSeeder } from './catalogue.seeder';
@@ -29,12 +30,15 @@ export class SeedService implements OnApplicationBootstrap {
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
-    if ((await this.dataSource.getRepository(DtcCode).count()) === 0) {
-      await this.dataSource.transaction((em) => this.catalogue.run(em));
-    }
-    if (!this.config.seedDemo) return;
-    if ((await this.dataSource.getRepository(User).count()) > 0) return;
-    await this.seedDemo();
+    // Instances starting together on one PostgreSQL seed one after the other: the second sees the first's rows.
+    await withStartupLock(this.dataSource, async () => {
+      if ((await this.dataSource.getRepository(DtcCode).count()) === 0) {
+        await this.dataSource.transaction((em) => this.catalogue.run(em));
+      }
+      if (!this.config.seedDemo) return;
+      if ((await this.dataSource.getRepository(User).count()) > 0) return;
+      await this.seedDemo();
+    });
   }
 
   async seedDemo(): Promise<void> {

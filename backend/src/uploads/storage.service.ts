@@ -4,10 +4,12 @@ import { mkdirSync } from 'node:fs';
 import { readFile, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { appConfig, type AppConfig } from '../config/configuration';
+import { storageConfig, type StorageConfig } from './storage.config';
 
 /**
- * Where uploaded files live, by opaque key. The local-disk driver below is the default; an
- * object-store driver can implement the same three calls and be provided instead.
+ * Where uploaded files live, by opaque key. The local-disk driver below is the default; the
+ * S3-compatible object-store driver (storage-s3.ts) implements the same three calls and is chosen
+ * with STORAGE_DRIVER=s3 (see storageDriver below).
  */
 export abstract class StorageService {
   /** A new random key: never derived from anything the user sent. */
@@ -24,7 +26,7 @@ export abstract class StorageService {
 
 const KEY = /^[0-9a-f]{32}$/;
 
-function checkKey(key: string): void {
+export function checkKey(key: string): void {
   // Keys are only ever made by newKey(); anything else must never reach the file system.
   if (!KEY.test(key)) throw new Error('Invalid storage key');
 }
@@ -61,3 +63,16 @@ export class LocalDiskStorage extends StorageService {
     await rm(join(this.root, key), { force: true });
   }
 }
+
+/** The provider of StorageService: the driver STORAGE_DRIVER names (local disk by default). */
+export const storageProvider = {
+  provide: StorageService,
+  inject: [appConfig.KEY, storageConfig.KEY],
+  useFactory: async (app: AppConfig, storage: StorageConfig): Promise<StorageService> => {
+    if (storage.driver === 's3') {
+      const { S3Storage } = await import('./storage-s3');
+      return new S3Storage(storage);
+    }
+    return new LocalDiskStorage(app);
+  },
+};

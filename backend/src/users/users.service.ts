@@ -14,7 +14,7 @@ export class UsersService {
   async list(query: ListUsersQuery): Promise<Page<UserDto>> {
     const qb = this.users.createQueryBuilder('u').leftJoinAndSelect('u.shop', 'shop');
     if (query.q) {
-      const q = `%${query.q.toLowerCase().replace(/[%_]/g, (c) => `\\${c}`)}%`;
+      const q = `%${query.q.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
       qb.andWhere(new Brackets((w) => w.where("u.emailNormalized LIKE :q ESCAPE '\\'", { q }).orWhere("LOWER(u.displayName) LIKE :q ESCAPE '\\'", { q })));
     }
     if (query.role) qb.andWhere('u.role = :role', { role: query.role });

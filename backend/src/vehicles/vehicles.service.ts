@@ -5,6 +5,7 @@ import { validateVin, type FieldError, type Page, type VehicleDto, type VinResul
 import type { AuthUser } from '../auth/auth-user';
 import { Job } from '../jobs/entities/job.entity';
 import type { Shop } from '../shops/entities/shop.entity';
+import { validationFailed } from '../common/validation';
 import { ShopsService } from '../shops/shops.service';
 import type { CreateVehicleDto, UpdateVehicleDto, VehicleListQuery } from './dto/vehicle.dto';
 import { Vehicle } from './entities/vehicle.entity';
@@ -124,7 +125,8 @@ export class VehiclesService {
         ),
       );
     }
-    qb.orderBy(VEHICLE_SORT_COLUMNS[q.sort], q.order === 'asc' ? 'ASC' : 'DESC').addOrderBy('v.id', 'ASC');
+    // Empty values last in both directions, on SQLite and PostgreSQL alike (their defaults differ).
+    qb.orderBy(VEHICLE_SORT_COLUMNS[q.sort], q.order === 'asc' ? 'ASC' : 'DESC', 'NULLS LAST').addOrderBy('v.id', 'ASC');
     qb.skip((q.page - 1) * q.pageSize).take(q.pageSize);
     const [rows, total] = await qb.getManyAndCount();
     return { items: rows.map((v) => toVehicleDto(v, shop)), total, page: q.page, pageSize: q.pageSize };
@@ -161,6 +163,9 @@ export class VehiclesService {
   async update(user: AuthUser, id: string, dto: UpdateVehicleDto): Promise<VehicleDto> {
     const shop = await this.shops.shopOf(user);
     const vehicle = await this.findOwned(shop, id);
+    // PartialType lets null through every field; make and model are required, so they cannot be cleared.
+    const cleared = (['make', 'model'] as const).filter((k) => dto[k] === null);
+    if (cleared.length > 0) throw validationFailed(cleared.map((field) => ({ field, message: 'is required: it cannot be cleared' })));
     if (dto.vin !== undefined) {
       const vin = vinOr400(dto.vin);
       if (vin.vin !== vehicle.vin) {

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
-import { IsEmail, IsIn, IsInt, IsOptional, IsString, Length, Matches, Max, MaxLength, Min, MinLength, Validate, ValidateNested, ValidatorConstraint, type ValidatorConstraintInterface } from 'class-validator';
+import { IsEmail, IsIn, IsInt, IsObject, IsOptional, IsString, Length, Matches, Max, MaxLength, Min, MinLength, Validate, ValidateNested, ValidatorConstraint, type ValidatorConstraintInterface } from 'class-validator';
 import { isIsoCurrency, PASSWORD_RULE, passwordMeetsRule } from '@causeway/shared';
 
 @ValidatorConstraint({ name: 'passwordRule' })
@@ -103,6 +103,8 @@ export class RegisterDto {
 
   @ApiPropertyOptional({ type: ShopSettingsDto, description: 'Create a new shop, of which the new user is the owner' })
   @IsOptional()
+  // ValidateNested alone lets an array through (its items are validated instead): a 500 later.
+  @IsObject({ message: "must be an object with the new shop's settings" })
   @ValidateNested()
   @Type(() => ShopSettingsDto)
   shop?: ShopSettingsDto;

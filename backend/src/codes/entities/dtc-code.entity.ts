@@ -41,11 +41,11 @@ export class DtcCode {
   verificationProcedure: string;
 
   /** Labour hours to clear, drive and confirm the fix. */
-  @Column('real', { default: 0.5 })
+  @Column('double precision', { default: 0.5 })
   verificationHours: number;
 
   /** Labour hours of further diagnosis when the likely causes are exhausted; null = not offered. */
-  @Column('real', { nullable: true })
+  @Column('double precision', { nullable: true })
   escalationHours: number | null;
 
   @Column('text', { default: '' })

@@ -1,7 +1,7 @@
 import { MigrationInterface, QueryRunner, Table, TableForeignKey, TableIndex } from 'typeorm';
 import { boolColumn, idColumn, refColumn, timestampColumn } from '../portable';
 
-/** Scan-tool CSV imports: their history and reports, saved column mappings, one row per imported reading, and the jobs imports opened. */
+/** Scan-tool CSV imports: their history and reports, saved column mappings, and the hashes of the rows imported per vehicle and scan day. */
 export class Imports1764600500000 implements MigrationInterface {
   name = 'Imports1764600500000';
 
@@ -59,52 +59,31 @@ export class Imports1764600500000 implements MigrationInterface {
         ],
       }),
     );
-    // One row per imported reading: its content hash makes re-imports change nothing. The key is
-    // (shopId, vehicleId, hash) — the hash covers the VIN, so it is unique per shop — and, on
-    // SQLite, the table is WITHOUT ROWID: one B-tree, in which a vehicle's rows sit together (and a
-    // new vehicle's time-ordered id appends at the end), keeps a 100 000-row import fast. importId
-    // and jobId are plain references without foreign keys, so the hashes outlive a deleted job.
+    // The content hashes of the rows imported for each vehicle and scan day, and the job they went
+    // to. A row's hash covers its VIN and scan time, so equal rows can only meet within one vehicle
+    // and day: one row here per vehicle-day (not per reading) keeps re-imports changing nothing while
+    // a 100 000-row import writes a fifth of the rows. jobId and importId are plain references
+    // without foreign keys, so the hashes outlive a deleted job.
     await qr.createTable(
       new Table({
-        name: 'import_rows',
+        name: 'import_days',
         withoutRowid: true,
         columns: [
           { ...refColumn(qr, 'shopId'), isPrimary: true },
           { ...refColumn(qr, 'vehicleId'), isPrimary: true },
-          { name: 'hash', type: 'varchar', length: '43', isPrimary: true },
+          { name: 'scanDay', type: 'varchar', length: '10', isPrimary: true },
+          refColumn(qr, 'jobId'),
           refColumn(qr, 'importId'),
-          { name: 'line', type: 'integer' },
-          refColumn(qr, 'jobId', true),
-          { name: 'scanDay', type: 'varchar', length: '10' },
-          { name: 'code', type: 'varchar', length: '8' },
-          { name: 'module', type: 'varchar', length: '60', isNullable: true },
+          { name: 'hashes', type: 'text' },
+          { name: 'modules', type: 'text', isNullable: true },
         ],
         foreignKeys: [new TableForeignKey({ columnNames: ['shopId'], referencedTableName: 'shops', referencedColumnNames: ['id'], onDelete: 'CASCADE' })],
-      }),
-    );
-    // The job an import opened for a vehicle and scan day, so that a later file of the same day adds to it.
-    await qr.createTable(
-      new Table({
-        name: 'import_jobs',
-        columns: [
-          { ...refColumn(qr, 'jobId'), isPrimary: true },
-          refColumn(qr, 'shopId'),
-          refColumn(qr, 'vehicleId'),
-          { name: 'scanDay', type: 'varchar', length: '10' },
-          refColumn(qr, 'importId'),
-        ],
-        indices: [new TableIndex({ name: 'IDX_import_jobs_vehicle_day', columnNames: ['shopId', 'vehicleId', 'scanDay'] })],
-        foreignKeys: [
-          new TableForeignKey({ columnNames: ['jobId'], referencedTableName: 'jobs', referencedColumnNames: ['id'], onDelete: 'CASCADE' }),
-          new TableForeignKey({ columnNames: ['shopId'], referencedTableName: 'shops', referencedColumnNames: ['id'], onDelete: 'CASCADE' }),
-        ],
       }),
     );
   }
 
   async down(qr: QueryRunner): Promise<void> {
-    await qr.dropTable('import_jobs');
-    await qr.dropTable('import_rows');
+    await qr.dropTable('import_days');
     await qr.dropTable('import_mappings');
     await qr.dropTable('imports');
   }

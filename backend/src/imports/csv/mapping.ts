@@ -31,7 +31,8 @@ const UNIT_WORDS: Record<string, 'km' | 'mi'> = {
 
 /** Reads a unit word (km, kms, kilometres, mi, miles …), or null. */
 export function unitWord(s: string): 'km' | 'mi' | null {
-  return UNIT_WORDS[s.trim().toLowerCase().replace(/\.$/, '')] ?? null;
+  const word = s.trim().toLowerCase().replace(/\.$/, '');
+  return Object.hasOwn(UNIT_WORDS, word) ? UNIT_WORDS[word] : null;
 }
 
 export function normaliseHeader(h: string): string {
@@ -43,8 +44,12 @@ const FREEZE_FRAME_HEADER = /^\s*(?:ff|freeze[\s_-]*frame)\s*[:._\-\s]\s*(\S.*)$
 /** The freeze-frame key of a header such as "FF: RPM" or "Freeze frame: Coolant temp", or null. */
 export function freezeFrameKey(header: string): string | null {
   const m = FREEZE_FRAME_HEADER.exec(header.replace(/^\uFEFF/, ''));
-  return m ? m[1].trim().slice(0, 60) : null;
+  const key = m ? m[1].trim().slice(0, 60) : null;
+  return key && !RESERVED_KEYS.has(key) ? key : null;
 }
+
+/** Keys that would reach an object's prototype rather than be stored. */
+export const RESERVED_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 
 /** A header's field and, for an odometer header, the unit it names ("Odometer (mi)", "mileage_km"). */
 export function classifyHeader(header: string): { field: ImportField; unit: 'km' | 'mi' | null } | null {
@@ -192,8 +197,8 @@ export function validateMappingInput(value: unknown, field = 'mapping'): { mappi
         const key = isPlainObject(e) ? (e.key ?? e.header) : undefined;
         if (typeof header !== 'string' || header.trim() === '' || header.length > 200) {
           errors.push({ field: `${field}.freezeFrame.${i}.header`, message: 'must be a header of 1–200 characters' });
-        } else if (typeof key !== 'string' || key.trim() === '' || key.length > 60) {
-          errors.push({ field: `${field}.freezeFrame.${i}.key`, message: 'must be a key of 1–60 characters' });
+        } else if (typeof key !== 'string' || key.trim() === '' || key.length > 60 || RESERVED_KEYS.has(key.trim())) {
+          errors.push({ field: `${field}.freezeFrame.${i}.key`, message: 'must be a key of 1–60 characters (not __proto__, constructor or prototype)' });
         } else {
           out.freezeFrame!.push({ header: header.trim(), key: key.trim() });
         }
@@ -214,7 +219,7 @@ export function validateMappingInput(value: unknown, field = 'mapping'): { mappi
     } else {
       out.statusValues = {};
       for (const [k, v] of Object.entries(value.statusValues)) {
-        if (k.trim() === '' || k.length > 40) errors.push({ field: `${field}.statusValues`, message: `"${k.slice(0, 40)}" must be a word of 1–40 characters` });
+        if (k.trim() === '' || k.length > 40 || RESERVED_KEYS.has(k.trim().toLowerCase())) errors.push({ field: `${field}.statusValues`, message: `"${k.slice(0, 40)}" must be a word of 1–40 characters (not __proto__, constructor or prototype)` });
         else if (!STATUSES.includes(v as CodeStatus)) errors.push({ field: `${field}.statusValues.${k}`, message: 'must be stored, pending or permanent' });
         else out.statusValues[k.trim().toLowerCase()] = v as CodeStatus;
       }

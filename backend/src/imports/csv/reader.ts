@@ -27,6 +27,42 @@ function countBreaks(cell: string, br: string): number {
 }
 
 /**
+ * The line where a quoted field opens that is never closed, found by scanning the bytes as RFC 4180
+ * quotes them (a quote opens a field only at its start; "" inside is a quote); null when none is.
+ */
+export function unclosedQuoteLine(buf: Buffer, offset: number, delimiter: string, lineEnding: ImportDetected['lineEnding']): number | null {
+  const QUOTE = 0x22;
+  const br = lineEnding === 'cr' ? 0x0d : 0x0a;
+  const delim = delimiter.charCodeAt(0);
+  let line = 1;
+  let fieldStart = true;
+  let inQuote = false;
+  let quoteLine = 0;
+  for (let i = offset; i < buf.length; i++) {
+    const b = buf[i];
+    if (inQuote) {
+      if (b === QUOTE) {
+        if (buf[i + 1] === QUOTE) i += 1;
+        else inQuote = false;
+      } else if (b === br) {
+        line += 1;
+      }
+    } else if (b === QUOTE && fieldStart) {
+      inQuote = true;
+      quoteLine = line;
+    } else if (b === br) {
+      line += 1;
+      fieldStart = true;
+    } else if (b === delim) {
+      fieldStart = true;
+    } else if (b !== 0x0d) {
+      fieldStart = false;
+    }
+  }
+  return inQuote ? quoteLine : null;
+}
+
+/**
  * Streams the records of an uploaded file through csv-parse, chunk by chunk from the buffer (the
  * file is never decoded into one string), in batches. Line numbers: each record takes one line
  * plus the line breaks inside its quoted fields, so a record keeps the number of the line where
@@ -68,6 +104,8 @@ export async function* readRecords(buf: Buffer, offset: number, delimiter: strin
   } catch (err) {
     if (err instanceof FileProblem) throw err;
     const e = err as { code?: string; message?: string };
+    // Records parsed before the error may not have reached this loop: find the quote's line in the bytes.
+    if (e.code === 'CSV_QUOTE_NOT_CLOSED' || e.code === 'CSV_MAX_RECORD_SIZE') line = unclosedQuoteLine(buf, offset, delimiter, lineEnding) ?? line;
     const why =
       e.code === 'CSV_QUOTE_NOT_CLOSED'
         ? 'a quoted field opened here is never closed'

@@ -166,7 +166,8 @@ const HISTORY_WORDS = new Set(['history', 'historic', 'historical', 'inactive', 
 export function parseStatus(text: string, extra: Record<string, CodeStatus>): Parsed<CodeStatus> {
   const s = text.trim().toLowerCase().replace(/[\s_-]+/g, ' ');
   if (s === '') return { ok: true, value: 'stored' };
-  const hit = extra[s] ?? STATUS_WORDS[s];
+  // Own properties only: a cell saying "constructor" must not find Object's.
+  const hit = (Object.hasOwn(extra, s) ? extra[s] : undefined) ?? (Object.hasOwn(STATUS_WORDS, s) ? STATUS_WORDS[s] : undefined);
   if (hit) return { ok: true, value: hit };
   const byte = /^(?:0x|\$)([0-9a-f]{2})$/.exec(s);
   if (byte) {

@@ -35,7 +35,7 @@ import {
   type StepKind,
   type StepResult,
 } from '@causeway/shared';
-import { MAX_ODOMETER } from '../../vehicles/dto/vehicle.dto';
+import { MAX_ODOMETER, OneDecimalAtMost } from '../../vehicles/dto/vehicle.dto';
 
 const trimmed = () => Transform(({ value }) => (typeof value === 'string' ? value.trim() : value));
 
@@ -67,7 +67,7 @@ export class CreateJobDto implements CreateJobRequest {
   complaint: string;
 
   @ApiProperty({ type: [JobCodeInputDto] })
-  @IsArray() @ArrayMinSize(1, { message: 'needs at least one fault code' }) @ArrayMaxSize(20) @ValidateNested({ each: true }) @Type(() => JobCodeInputDto)
+  @IsArray() @ArrayMinSize(1, { message: 'needs at least one fault code' }) @ArrayMaxSize(20) @IsObject({ each: true, message: 'each must be an object { code, status, freezeFrame? }' }) @ValidateNested({ each: true }) @Type(() => JobCodeInputDto)
   codes: JobCodeInputDto[];
 
   @ApiPropertyOptional({ description: 'A member of the shop; the caller when absent' })
@@ -75,7 +75,7 @@ export class CreateJobDto implements CreateJobRequest {
   technicianId?: string;
 
   @ApiPropertyOptional({ description: "Odometer in the shop's unit; updates the vehicle's reading" })
-  @IsOptional() @IsNumber({ allowNaN: false, allowInfinity: false, maxDecimalPlaces: 1 }) @Min(0) @Max(MAX_ODOMETER)
+  @IsOptional() @IsNumber({ allowNaN: false, allowInfinity: false }) @OneDecimalAtMost() @Min(0) @Max(MAX_ODOMETER)
   odometer?: number;
 
   @ApiPropertyOptional() @IsOptional() @IsBoolean()
@@ -134,7 +134,8 @@ export class CloseJobDto implements CloseJobRequest {
   verificationPassed?: boolean;
 
   @ApiPropertyOptional({ type: [FixedByDto], description: "What fixed each code; by default each code's last clearing replacement" })
-  @IsOptional() @IsArray() @ArrayMaxSize(20) @ValidateNested({ each: true }) @Type(() => FixedByDto)
+  // IsObject each: ValidateNested alone lets an array item through unchecked (a 500 later).
+  @IsOptional() @IsArray() @ArrayMaxSize(20) @IsObject({ each: true, message: 'each must be an object { code, parts }' }) @ValidateNested({ each: true }) @Type(() => FixedByDto)
   fixedBy?: FixedByDto[];
 
   @ApiPropertyOptional() @IsOptional() @trimmed() @IsString() @MaxLength(4000)

@@ -1,6 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsBoolean, IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { IsBoolean, IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { ROLES, type Role } from '@causeway/shared';
 
 export class ListUsersQuery {
@@ -12,7 +12,10 @@ export class ListUsersQuery {
   @ApiPropertyOptional({ enum: ['asc', 'desc'] }) @IsOptional() @IsIn(['asc', 'desc']) order: 'asc' | 'desc' = 'desc';
 }
 
+/** Absent means unchanged; null is not a value here (it would reach the NOT NULL columns: a 500). */
+const Present = () => ValidateIf((_o: object, v: unknown) => v !== undefined);
+
 export class UpdateUserDto {
-  @ApiPropertyOptional({ enum: ROLES }) @IsOptional() @IsIn(ROLES, { message: `must be one of ${ROLES.join(', ')}` }) role?: Role;
-  @ApiPropertyOptional() @IsOptional() @IsBoolean() disabled?: boolean;
+  @ApiPropertyOptional({ enum: ROLES }) @Present() @IsIn(ROLES, { message: `must be one of ${ROLES.join(', ')}` }) role?: Role;
+  @ApiPropertyOptional() @Present() @IsBoolean({ message: 'must be true or false' }) disabled?: boolean;
 }

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
-import { IsBoolean, IsEmail, IsIn, IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { IsBoolean, IsEmail, IsIn, IsInt, IsNotEmpty, IsNumber, IsOptional, IsString, Max, MaxLength, Min, ValidateBy } from 'class-validator';
 import { VEHICLE_SORTS, type VehicleInput, type VehicleSort } from '@causeway/shared';
 
 /** Trims text; an empty optional text becomes null (cleared). */
@@ -9,6 +9,13 @@ const trimmedOrNull = () => Transform(({ value }) => (typeof value === 'string' 
 
 /** The longest odometer reading accepted, in the shop's unit. */
 export const MAX_ODOMETER = 2_000_000;
+
+/**
+ * At most one decimal place. Not IsNumber's maxDecimalPlaces: that throws on a number that
+ * prints with an exponent (1e-7), which made a 500 of a bad odometer reading.
+ */
+export const OneDecimalAtMost = () =>
+  ValidateBy({ name: 'oneDecimalAtMost', validator: { validate: (v: unknown) => typeof v !== 'number' || Number(v.toFixed(1)) === v, defaultMessage: () => 'must have at most one decimal place' } });
 
 export class CreateVehicleDto implements VehicleInput {
   @ApiProperty({ example: '1HGCM82633A004352', description: '17 characters, no I, O or Q; spaces and dashes are ignored. The check digit (position 9, 49 CFR 565.15) must match for North-American VINs (first character 1–5).' })
@@ -32,7 +39,7 @@ export class CreateVehicleDto implements VehicleInput {
   plate?: string | null;
 
   @ApiPropertyOptional({ example: 52320, nullable: true, description: "Odometer in the shop's unit (km or mi); stored in km" })
-  @IsOptional() @IsNumber({ allowNaN: false, allowInfinity: false, maxDecimalPlaces: 1 }) @Min(0) @Max(MAX_ODOMETER)
+  @IsOptional() @IsNumber({ allowNaN: false, allowInfinity: false }) @OneDecimalAtMost() @Min(0) @Max(MAX_ODOMETER)
   odometer?: number | null;
 
   @ApiPropertyOptional({ nullable: true }) @IsOptional() @trimmedOrNull() @IsString() @MaxLength(120)
