@@ -20,7 +20,7 @@ async function startMailCatcher() {
     await maildev.start();
     process.env.SMTP_HOST = '127.0.0.1';
     process.env.SMTP_PORT = String(smtp);
-    console.log(`Mail catcher: SMTP on 127.0.0.1:${smtp}, caught mail at http://localhost:${web}`);
+    console.log(`Mail catcher: SMTP on 127.0.0.1:${smtp}, caught mail at http://localhost:${web}/index.html`);
   } catch (err) {
     console.warn(`Mail catcher not started (${err instanceof Error ? err.message : err}); e-mail will fail until SMTP_HOST is set`);
   }
