@@ -57,20 +57,23 @@ function uniq(keys: Iterable<string>): string[] {
   return [...new Set(keys)];
 }
 
-function toPartDto(p: Part): PartDto {
+/** The API shape of a part; also what the audit log keeps of one. */
+export function toPartDto(p: Part): PartDto {
   return { key: p.key, name: p.name, system: p.system };
 }
 
-function toTeardownDto(t: Teardown): TeardownDto {
+/** The API shape of a teardown; also what the audit log keeps of one. */
+export function toTeardownDto(t: Teardown): TeardownDto {
   return { key: t.key, name: t.name, hours: t.hours, cautions: t.cautions, make: t.make, model: t.model, engine: t.engine, yearFrom: t.yearFrom, yearTo: t.yearTo };
 }
 
-function toCauseRowDto(c: PossibleCause): PossibleCauseRowDto {
+/** A possible cause as the knowledge tables list it; `partName` when the part relation is not loaded. */
+export function toCauseRowDto(c: PossibleCause, partName?: string): PossibleCauseRowDto {
   return {
     id: c.id,
     code: c.code,
     partKey: c.partKey,
-    partName: c.part?.name ?? c.partKey,
+    partName: partName ?? c.part?.name ?? c.partKey,
     prior: c.prior,
     partCostMinor: c.partCostMinor,
     currency: c.currency,
@@ -119,7 +122,7 @@ export class KnowledgeService {
   async listCauses(code?: string): Promise<PossibleCauseRowDto[]> {
     const where = code ? { code: parseCodeOr400(code, 'code').code } : {};
     const rows = await this.causeRepo.find({ where, relations: { part: true }, order: { code: 'ASC', make: 'ASC', model: 'ASC', prior: 'DESC' } });
-    return rows.map(toCauseRowDto);
+    return rows.map((c) => toCauseRowDto(c));
   }
 
   async exchangeRates(): Promise<ExchangeRateDto[]> {

@@ -1,7 +1,7 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, In, type EntityManager } from 'typeorm';
-import { PART_SYSTEMS, type FieldError, type PartDto, type PossibleCauseRowDto, type TeardownDto } from '@causeway/shared';
+import { PART_SYSTEMS, type FieldError } from '@causeway/shared';
 import { AuditService, type AuditActor } from '../audit/audit.service';
 import { parseCodeOr400 } from '../codes/codes.service';
 import { DtcCode } from '../codes/entities/dtc-code.entity';
@@ -10,39 +10,12 @@ import { validationFailed } from '../common/validation';
 import { Part } from '../knowledge/entities/part.entity';
 import { PossibleCause } from '../knowledge/entities/possible-cause.entity';
 import { Teardown } from '../knowledge/entities/teardown.entity';
+import { toPartDto, toTeardownDto } from '../knowledge/knowledge.service';
 import { describeScope, scopeKey, type Scoped } from '../knowledge/scope';
 import type { CodeEditDto, CreateCauseDto, CreatePartDto, CreateTeardownDto, ScopeDto, UpdateCauseDto, UpdatePartDto, UpdateTeardownDto } from './dto/knowledge-edit.dto';
 
 /** Priors of one code and scope may sum to at most 1, within rounding of stored weights. */
 const SUM_TOLERANCE = 1e-9;
-
-export function toPartDto(p: Part): PartDto {
-  return { key: p.key, name: p.name, system: p.system };
-}
-
-export function toTeardownDto(t: Teardown): TeardownDto {
-  return { key: t.key, name: t.name, hours: t.hours, cautions: t.cautions, make: t.make, model: t.model, engine: t.engine, yearFrom: t.yearFrom, yearTo: t.yearTo };
-}
-
-export function toCauseRowDto(c: PossibleCause, partName?: string): PossibleCauseRowDto {
-  return {
-    id: c.id,
-    code: c.code,
-    partKey: c.partKey,
-    partName: partName ?? c.part?.name ?? c.partKey,
-    prior: c.prior,
-    partCostMinor: c.partCostMinor,
-    currency: c.currency,
-    replaceHours: c.replaceHours,
-    teardownKey: c.teardownKey,
-    check: c.checkHours === null ? null : { description: c.checkDescription, hours: c.checkHours, mustPrecede: c.checkMustPrecede },
-    make: c.make,
-    model: c.model,
-    engine: c.engine,
-    yearFrom: c.yearFrom,
-    yearTo: c.yearTo,
-  };
-}
 
 /** The editable fields of a cause, as the audit log keeps them. */
 function causeSnapshot(c: PossibleCause): Record<string, unknown> {

@@ -8,8 +8,9 @@ import { CodesService } from '../codes/codes.service';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { Part } from '../knowledge/entities/part.entity';
+import { toCauseRowDto, toPartDto, toTeardownDto } from '../knowledge/knowledge.service';
 import { CodeEditDto, CodeEditQuery, CreateCauseDto, CreatePartDto, CreateTeardownDto, UpdateCauseDto, UpdatePartDto, UpdateTeardownDto } from './dto/knowledge-edit.dto';
-import { KnowledgeEditsService, toCauseRowDto, toPartDto, toTeardownDto } from './knowledge-edits.service';
+import { KnowledgeEditsService } from './knowledge-edits.service';
 
 /**
  * Direct edits of the knowledge base (moderators and admins). Reading it is the knowledge

@@ -43,6 +43,26 @@ const COST_RULE = 'must be a finite number ≥ 0';
 const PROBABILITY_RULE = 'must be a number in [0, 1]';
 
 /**
+ * The part every entry of a keyed list (causes, add-ons) shares: an object with a non-empty key,
+ * unique in its list, and an optional label. False when it is no object at all (nothing more to check).
+ */
+function checkKeyedEntry(raw: unknown, field: string, seen: Set<string>, issues: PlanIssue[]): raw is Record<string, unknown> {
+  if (!isRecord(raw)) {
+    issues.push({ field, message: 'must be an object' });
+    return false;
+  }
+  if (typeof raw.key !== 'string' || raw.key.length === 0) {
+    issues.push({ field: `${field}.key`, message: 'must be a non-empty string' });
+  } else if (seen.has(raw.key)) {
+    issues.push({ field: `${field}.key`, message: `duplicate key '${raw.key}'` });
+  } else {
+    seen.add(raw.key);
+  }
+  if (!isOptionalLabel(raw.label)) issues.push({ field: `${field}.label`, message: 'must be a string when given' });
+  return true;
+}
+
+/**
  * Every problem with a fix-path input, each naming its field (`causes.2.probability`,
  * `teardowns.K`, `addOns.0.teardown`, …) and the rule it breaks. Empty = valid.
  */
@@ -60,6 +80,11 @@ export function validatePlanInput(input: unknown): PlanIssue[] {
     }
   }
   const teardownsOk = isRecord(input.teardowns);
+  /** A reference to a teardown must name one of `teardowns` (when those are readable at all). */
+  const checkTeardownRef = (value: unknown, field: string, rule: string) => {
+    if (typeof value !== 'string') issues.push({ field, message: rule });
+    else if (teardownsOk && !teardownKeys.has(value)) issues.push({ field, message: `unknown teardown '${value}': not a key of teardowns` });
+  };
 
   let probabilitySum = 0;
   if (!Array.isArray(input.causes)) {
@@ -71,18 +96,7 @@ export function validatePlanInput(input: unknown): PlanIssue[] {
     const seen = new Set<string>();
     input.causes.forEach((raw: unknown, i) => {
       const f = `causes.${i}`;
-      if (!isRecord(raw)) {
-        issues.push({ field: f, message: 'must be an object' });
-        return;
-      }
-      if (typeof raw.key !== 'string' || raw.key.length === 0) {
-        issues.push({ field: `${f}.key`, message: 'must be a non-empty string' });
-      } else if (seen.has(raw.key)) {
-        issues.push({ field: `${f}.key`, message: `duplicate key '${raw.key}'` });
-      } else {
-        seen.add(raw.key);
-      }
-      if (!isOptionalLabel(raw.label)) issues.push({ field: `${f}.label`, message: 'must be a string when given' });
+      if (!checkKeyedEntry(raw, f, seen, issues)) return;
       if (!isProbability(raw.probability)) issues.push({ field: `${f}.probability`, message: PROBABILITY_RULE });
       else probabilitySum += raw.probability;
       if (!isCost(raw.replaceCost)) issues.push({ field: `${f}.replaceCost`, message: COST_RULE });
@@ -94,13 +108,7 @@ export function validatePlanInput(input: unknown): PlanIssue[] {
       } else if (raw.checkFirst === true && raw.checkCost === undefined) {
         issues.push({ field: `${f}.checkFirst`, message: 'a cause that must be checked first needs a checkCost' });
       }
-      if (raw.teardown !== undefined) {
-        if (typeof raw.teardown !== 'string') {
-          issues.push({ field: `${f}.teardown`, message: 'must be a teardown key (string) when given' });
-        } else if (teardownsOk && !teardownKeys.has(raw.teardown)) {
-          issues.push({ field: `${f}.teardown`, message: `unknown teardown '${raw.teardown}': not a key of teardowns` });
-        }
-      }
+      if (raw.teardown !== undefined) checkTeardownRef(raw.teardown, `${f}.teardown`, 'must be a teardown key (string) when given');
     });
   }
 
@@ -124,23 +132,8 @@ export function validatePlanInput(input: unknown): PlanIssue[] {
       const seen = new Set<string>();
       input.addOns.forEach((raw: unknown, i) => {
         const f = `addOns.${i}`;
-        if (!isRecord(raw)) {
-          issues.push({ field: f, message: 'must be an object' });
-          return;
-        }
-        if (typeof raw.key !== 'string' || raw.key.length === 0) {
-          issues.push({ field: `${f}.key`, message: 'must be a non-empty string' });
-        } else if (seen.has(raw.key)) {
-          issues.push({ field: `${f}.key`, message: `duplicate key '${raw.key}'` });
-        } else {
-          seen.add(raw.key);
-        }
-        if (!isOptionalLabel(raw.label)) issues.push({ field: `${f}.label`, message: 'must be a string when given' });
-        if (typeof raw.teardown !== 'string') {
-          issues.push({ field: `${f}.teardown`, message: 'must be a teardown key (string)' });
-        } else if (teardownsOk && !teardownKeys.has(raw.teardown)) {
-          issues.push({ field: `${f}.teardown`, message: `unknown teardown '${raw.teardown}': not a key of teardowns` });
-        }
+        if (!checkKeyedEntry(raw, f, seen, issues)) return;
+        checkTeardownRef(raw.teardown, `${f}.teardown`, 'must be a teardown key (string)');
         if (!isCost(raw.cost)) issues.push({ field: `${f}.cost`, message: COST_RULE });
       });
     }

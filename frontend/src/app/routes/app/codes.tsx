@@ -1,15 +1,14 @@
 import { Card, Col, Row, Typography } from 'antd';
-import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { section } from '@/config/sections';
 import { CodeEntry } from '@/features/codes/components/code-entry';
 import { CodeSearch } from '@/features/codes/components/code-search';
 import { CodesTable } from '@/features/codes/components/codes-table';
 import { parseCodeListParams, toCodeListSearch } from '@/features/codes/utils/list-params';
+import { useSearchParamsState } from '@/hooks/use-search-params-state';
 
 export function Component() {
-  const [searchParams, setSearchParams] = useSearchParams();
-  const params = parseCodeListParams(searchParams);
+  const [params, setParams] = useSearchParamsState(parseCodeListParams, toCodeListSearch);
   const page = section('codes');
   return (
     <>
@@ -30,7 +29,7 @@ export function Component() {
         <Typography.Title level={2} id="browse-codes" style={{ fontSize: 22 }}>
           Browse the catalogue
         </Typography.Title>
-        <CodesTable params={params} onParamsChange={(next) => setSearchParams(toCodeListSearch(next))} />
+        <CodesTable params={params} onParamsChange={setParams} />
       </section>
     </>
   );

@@ -1,22 +1,22 @@
-import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { section } from '@/config/sections';
 import { InsightsView } from '@/features/insights/components/insights-view';
 import { parseInsightsParams, toInsightsSearch } from '@/features/insights/utils/params';
+import { useSearchParamsState } from '@/hooks/use-search-params-state';
 import { useCurrentUser } from '@/lib/current-user';
 import { browserLocale } from '@/utils/format';
 
 /** Shop insights; recharts comes with this lazily loaded page only. */
 export function Component() {
   const { shop } = useCurrentUser();
-  const [searchParams, setSearchParams] = useSearchParams();
+  const [params, setParams] = useSearchParamsState(parseInsightsParams, toInsightsSearch);
   const page = section('insights');
   return (
     <>
       <PageHeader title={page.label} description={page.purpose} />
       <InsightsView
-        params={parseInsightsParams(searchParams)}
-        onParamsChange={(next) => setSearchParams(toInsightsSearch(next))}
+        params={params}
+        onParamsChange={setParams}
         locale={shop?.locale ?? browserLocale()}
       />
     </>

@@ -1,7 +1,7 @@
 import { PlusOutlined } from '@ant-design/icons';
 import { Button, Drawer } from 'antd';
 import { useState } from 'react';
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { section } from '@/config/sections';
@@ -10,6 +10,7 @@ import { JobsTable } from '@/features/jobs/components/jobs-table';
 import { NewJobForm } from '@/features/jobs/components/new-job-form';
 import { parseJobListParams, toJobListSearch } from '@/features/jobs/utils/list-params';
 import { VehicleForm } from '@/features/vehicles/components/vehicle-form';
+import { useSearchParamsState } from '@/hooks/use-search-params-state';
 import { useCurrentUser } from '@/lib/current-user';
 import { browserLocale } from '@/utils/format';
 
@@ -17,12 +18,10 @@ export function Component() {
   const user = useCurrentUser();
   const { shop } = user;
   const navigate = useNavigate();
-  const [searchParams, setSearchParams] = useSearchParams();
   const [opening, setOpening] = useState(false);
-  const params = parseJobListParams(searchParams);
+  const [params, onParamsChange] = useSearchParamsState(parseJobListParams, toJobListSearch);
   const page = section('jobs');
   const locale = shop?.locale ?? browserLocale();
-  const onParamsChange = (next: typeof params) => setSearchParams(toJobListSearch(next));
   return (
     <>
       <PageHeader

@@ -1,7 +1,7 @@
 import { PlusOutlined } from '@ant-design/icons';
 import type { FieldError } from '@causeway/shared';
 import { Alert, App, Button, Result, Skeleton } from 'antd';
-import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useLocation, useNavigate, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { shopDefaultsFor } from '@/config/locales';
 import { paths } from '@/config/paths';
@@ -10,9 +10,10 @@ import { useReport } from '@/features/field-reports/api/get-report';
 import { MyReportsTable } from '@/features/field-reports/components/my-reports-table';
 import { ReportForm, type SavedHow } from '@/features/field-reports/components/report-form';
 import { ReportView } from '@/features/field-reports/components/report-view';
-import { KIND_LABELS } from '@/features/field-reports/utils/labels';
+import { KIND_LABELS } from '@/utils/field-report-labels';
 import { parseMyReportsParams, toMyReportsSearch } from '@/features/field-reports/utils/list-params';
 import { AttachmentGallery } from '@/features/review/components/attachment-gallery';
+import { useSearchParamsState } from '@/hooks/use-search-params-state';
 import { isApiError } from '@/lib/api-client';
 import { useCurrentUser } from '@/lib/current-user';
 import { browserLocale } from '@/utils/format';
@@ -51,7 +52,7 @@ function useAfterSave() {
 function MyReports() {
   const page = section('reports');
   const { locale } = useUnits();
-  const [searchParams, setSearchParams] = useSearchParams();
+  const [params, setParams] = useSearchParamsState(parseMyReportsParams, toMyReportsSearch);
   const navigate = useNavigate();
   return (
     <>
@@ -64,7 +65,7 @@ function MyReports() {
           </Button>
         }
       />
-      <MyReportsTable params={parseMyReportsParams(searchParams)} onParamsChange={(next) => setSearchParams(toMyReportsSearch(next))} reportPath={reportPath} locale={locale} />
+      <MyReportsTable params={params} onParamsChange={setParams} reportPath={reportPath} locale={locale} />
     </>
   );
 }

@@ -1,5 +1,5 @@
 import { App } from 'antd';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { section } from '@/config/sections';
@@ -7,6 +7,7 @@ import { ReportPayload } from '@/features/field-reports/components/report-payloa
 import { ReviewQueueTable } from '@/features/review/components/review-queue-table';
 import { ReviewReport } from '@/features/review/components/review-report';
 import { parseQueueParams, toQueueSearch } from '@/features/review/utils/queue-params';
+import { useSearchParamsState } from '@/hooks/use-search-params-state';
 import { useCurrentUser } from '@/lib/current-user';
 import { browserLocale } from '@/utils/format';
 
@@ -15,13 +16,13 @@ const reviewPath = (id: string) => `${paths.review}/${encodeURIComponent(id)}`;
 function Queue() {
   const page = section('review');
   const user = useCurrentUser();
-  const [searchParams, setSearchParams] = useSearchParams();
+  const [params, setParams] = useSearchParamsState(parseQueueParams, toQueueSearch);
   return (
     <>
       <PageHeader title={page.label} description={page.purpose} />
       <ReviewQueueTable
-        params={parseQueueParams(searchParams)}
-        onParamsChange={(next) => setSearchParams(toQueueSearch(next))}
+        params={params}
+        onParamsChange={setParams}
         reportPath={reviewPath}
         locale={user.shop?.locale ?? browserLocale()}
       />

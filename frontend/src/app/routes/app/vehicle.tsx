@@ -1,7 +1,7 @@
 import { DeleteOutlined, PlusOutlined } from '@ant-design/icons';
 import { App, Button, Card, Flex, Modal, Popconfirm, Result, Spin } from 'antd';
 import { useState } from 'react';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { JobsTable } from '@/features/jobs/components/jobs-table';
@@ -11,6 +11,7 @@ import { useDeleteVehicle } from '@/features/vehicles/api/delete-vehicle';
 import { useVehicle } from '@/features/vehicles/api/get-vehicle';
 import { VehicleForm } from '@/features/vehicles/components/vehicle-form';
 import { VehicleSummary } from '@/features/vehicles/components/vehicle-summary';
+import { useSearchParamsState } from '@/hooks/use-search-params-state';
 import { isApiError } from '@/lib/api-client';
 import { useCurrentUser } from '@/lib/current-user';
 import { browserLocale } from '@/utils/format';
@@ -20,7 +21,7 @@ export function Component() {
   const { shop } = useCurrentUser();
   const { message } = App.useApp();
   const navigate = useNavigate();
-  const [searchParams, setSearchParams] = useSearchParams();
+  const [jobListParams, setJobListParams] = useSearchParamsState(parseJobListParams, toJobListSearch);
   const [editing, setEditing] = useState(false);
   const [openingJob, setOpeningJob] = useState(false);
   const vehicle = useVehicle(id);
@@ -34,7 +35,8 @@ export function Component() {
     },
   });
   const locale = shop?.locale ?? browserLocale();
-  const jobParams = { ...parseJobListParams(searchParams), vehicleId: id };
+  // The vehicle is this page's, not a filter in the address.
+  const jobParams = { ...jobListParams, vehicleId: id };
 
   if (vehicle.isPending) return <Spin size="large" description="Loading the vehicle" style={{ display: 'block', margin: '64px auto' }} />;
   if (vehicle.isError) {
@@ -91,10 +93,7 @@ export function Component() {
         <Card title={<h2 style={{ fontSize: 20, margin: 0 }}>Jobs on this vehicle</h2>}>
           <JobsTable
             params={jobParams}
-            onParamsChange={(next) => {
-              const search = toJobListSearch({ ...next, vehicleId: undefined });
-              setSearchParams(search);
-            }}
+            onParamsChange={(next) => setJobListParams({ ...next, vehicleId: undefined })}
             locale={locale}
             jobHref={paths.job}
             hideVehicle

@@ -1,22 +1,22 @@
 import { PlusOutlined } from '@ant-design/icons';
 import { Button, Modal } from 'antd';
 import { useState } from 'react';
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { section } from '@/config/sections';
 import { VehicleForm } from '@/features/vehicles/components/vehicle-form';
 import { VehiclesTable } from '@/features/vehicles/components/vehicles-table';
 import { parseVehicleListParams, toVehicleListSearch } from '@/features/vehicles/utils/list-params';
+import { useSearchParamsState } from '@/hooks/use-search-params-state';
 import { useCurrentUser } from '@/lib/current-user';
 import { browserLocale } from '@/utils/format';
 
 export function Component() {
   const { shop } = useCurrentUser();
   const navigate = useNavigate();
-  const [searchParams, setSearchParams] = useSearchParams();
   const [adding, setAdding] = useState(false);
-  const params = parseVehicleListParams(searchParams);
+  const [params, setParams] = useSearchParamsState(parseVehicleListParams, toVehicleListSearch);
   const page = section('vehicles');
   const locale = shop?.locale ?? browserLocale();
   return (
@@ -32,7 +32,7 @@ export function Component() {
           )
         }
       />
-      <VehiclesTable params={params} onParamsChange={(next) => setSearchParams(toVehicleListSearch(next))} locale={locale} vehicleHref={paths.vehicle} />
+      <VehiclesTable params={params} onParamsChange={setParams} locale={locale} vehicleHref={paths.vehicle} />
       <Modal title="Add a vehicle" open={adding} onCancel={() => setAdding(false)} footer={null} destroyOnHidden width={760}>
         {shop && (
           <VehicleForm

@@ -1,10 +1,11 @@
 import type { AuditEntryDto } from '@causeway/shared';
-import { Alert, Button, Col, Form, Input, Row, Select, Table, Tag, Typography, type TableColumnsType, type TableProps } from 'antd';
+import { Alert, Button, Col, Form, Input, Row, Select, Table, Tag, Typography, type TableColumnsType } from 'antd';
 import { useEffect } from 'react';
+import { useTableParams } from '@/hooks/use-table-params';
 import { formatDateTime } from '@/utils/format';
 import { useAuditEntries } from '../api/get-audit-entries';
 import { ACTION_OPTIONS, actionLabel, ENTITY_TYPE_LABELS } from '../utils/labels';
-import { PAGE_SIZES, type AuditListParams } from '../utils/list-params';
+import { AUDIT_TABLE, type AuditListParams } from '../utils/list-params';
 import { BeforeAfter } from './before-after';
 
 type AuditTableProps = {
@@ -28,6 +29,7 @@ function filtersOf(params: AuditListParams): FilterValues {
 
 export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) {
   const entries = useAuditEntries(params);
+  const table = useTableParams(params, onParamsChange, AUDIT_TABLE);
   const [form] = Form.useForm<FilterValues>();
 
   // The address bar is the truth: going back or forward puts its filters in the form.
@@ -67,11 +69,6 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
     },
   ];
 
-  const onChange: TableProps<AuditEntryDto>['onChange'] = (pagination, _filters, _sorter, extra) => {
-    const pageSize = pagination.pageSize ?? params.pageSize;
-    onParamsChange({ ...params, pageSize, page: extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1 });
-  };
-
   const filtered = !!(params.actor || params.action || params.entityType || params.from || params.to);
 
   return (
@@ -81,9 +78,7 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
         layout="vertical"
         initialValues={filtersOf(params)}
         onFinish={(values) =>
-          onParamsChange({
-            ...params,
-            page: 1,
+          table.refine({
             actor: values.actor?.trim() ?? '',
             action: values.action ?? '',
             entityType: values.entityType ?? '',
@@ -143,7 +138,7 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
         {filtered && (
           <Button
             type="link"
-            onClick={() => onParamsChange({ ...params, page: 1, actor: '', action: '', entityType: '', from: '', to: '' })}
+            onClick={() => table.refine({ actor: '', action: '', entityType: '', from: '', to: '' })}
             style={{ paddingInline: 0 }}
           >
             Clear the filters
@@ -156,17 +151,10 @@ export function AuditTable({ params, onParamsChange, locale }: AuditTableProps) 
         columns={columns}
         dataSource={entries.data?.items ?? []}
         loading={entries.isFetching}
-        onChange={onChange}
+        onChange={table.onChange}
         expandable={{ expandedRowRender: (e) => <BeforeAfter entry={e} />, expandRowByClick: false }}
         locale={{ emptyText: filtered ? 'No entries match these filters' : 'Nothing has been recorded yet' }}
-        pagination={{
-          current: params.page,
-          pageSize: params.pageSize,
-          total: entries.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: PAGE_SIZES.map(String),
-          showTotal: (total) => `${total} ${total === 1 ? 'entry' : 'entries'}`,
-        }}
+        pagination={table.pagination(entries.data?.total ?? 0, (total) => `${total} ${total === 1 ? 'entry' : 'entries'}`)}
       />
     </>
   );

@@ -1,19 +1,15 @@
 import { DTC_CONTROL_LABELS, DTC_SYSTEM_NAMES, type CodeSummaryDto, type DtcControl, type DtcSystem } from '@causeway/shared';
-import { Alert, Input, Select, Space, Table, Tag, type TableColumnsType, type TableProps } from 'antd';
+import { Alert, Input, Select, Space, Table, Tag, type TableColumnsType } from 'antd';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import { useTableParams } from '@/hooks/use-table-params';
 import { useSearchCodes } from '../api/search-codes';
-import { CODE_CONTROLS, CODE_PAGE_SIZES, CODE_SORT_FIELDS, CODE_SYSTEMS, type CodeListParams, type CodeSortField } from '../utils/list-params';
+import { CODE_CONTROLS, CODE_SYSTEMS, CODE_TABLE, type CodeListParams } from '../utils/list-params';
 
 type CodesTableProps = {
   params: CodeListParams;
   onParamsChange: (params: CodeListParams) => void;
 };
-
-function sortOrderOf(params: CodeListParams, field: CodeSortField) {
-  if (params.sort !== field) return null;
-  return params.order === 'desc' ? 'descend' : 'ascend';
-}
 
 function systemName(system: string): string {
   return DTC_SYSTEM_NAMES[system as DtcSystem] ?? system;
@@ -26,14 +22,13 @@ function controlLabel(control: string): string {
 /** The catalogue page by page, searched, filtered and sorted by the server; every choice is in the address. */
 export function CodesTable({ params, onParamsChange }: CodesTableProps) {
   const codes = useSearchCodes(params);
+  const { sortable, onChange, refine, pagination } = useTableParams(params, onParamsChange, CODE_TABLE);
 
   const columns: TableColumnsType<CodeSummaryDto> = [
     {
       title: 'Code',
       dataIndex: 'code',
-      key: 'code',
-      sorter: true,
-      sortOrder: sortOrderOf(params, 'code'),
+      ...sortable('code'),
       width: 110,
       render: (code: string, row) => (
         <Link to={paths.code(code) + (row.make ? `?make=${encodeURIComponent(row.make)}` : '')} style={{ fontWeight: 600 }}>
@@ -44,34 +39,17 @@ export function CodesTable({ params, onParamsChange }: CodesTableProps) {
     {
       title: 'Title',
       dataIndex: 'title',
-      key: 'title',
-      sorter: true,
-      sortOrder: sortOrderOf(params, 'title'),
+      ...sortable('title'),
       render: (title: string, row) => (
         <>
           {title} {row.make && <Tag>{row.make} only</Tag>}
         </>
       ),
     },
-    { title: 'Subsystem', dataIndex: 'subsystem', key: 'subsystem', sorter: true, sortOrder: sortOrderOf(params, 'subsystem') },
+    { title: 'Subsystem', dataIndex: 'subsystem', ...sortable('subsystem') },
     { title: 'System', dataIndex: 'system', key: 'system', render: systemName },
     { title: 'Who controls it', dataIndex: 'control', key: 'control', render: controlLabel },
   ];
-
-  const onChange: TableProps<CodeSummaryDto>['onChange'] = (pagination, _filters, sorter, extra) => {
-    const { columnKey, order } = (Array.isArray(sorter) ? sorter[0] : sorter) ?? {};
-    const sortField = CODE_SORT_FIELDS.find((f) => f === columnKey);
-    const pageSize = pagination.pageSize ?? params.pageSize;
-    // A new order or page size starts again at the first page.
-    const page = extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1;
-    onParamsChange({
-      ...params,
-      page,
-      pageSize,
-      sort: order && sortField ? sortField : undefined,
-      order: order && sortField ? (order === 'descend' ? 'desc' : 'asc') : undefined,
-    });
-  };
 
   return (
     <>
@@ -84,20 +62,20 @@ export function CodesTable({ params, onParamsChange }: CodesTableProps) {
           allowClear
           enterButton="Filter"
           maxLength={100}
-          onSearch={(q) => onParamsChange({ ...params, q: q.trim(), page: 1 })}
+          onSearch={(q) => refine({ q: q.trim() })}
           style={{ width: 360 }}
         />
         <Select<DtcSystem | ''>
           aria-label="System"
           value={params.system ?? ''}
-          onChange={(system) => onParamsChange({ ...params, system: system || undefined, page: 1 })}
+          onChange={(system) => refine({ system: system || undefined })}
           options={[{ value: '', label: 'Every system' }, ...CODE_SYSTEMS.map((s) => ({ value: s, label: `${DTC_SYSTEM_NAMES[s]} (${s})` }))]}
           style={{ width: 200 }}
         />
         <Select<DtcControl | ''>
           aria-label="Who controls it"
           value={params.control ?? ''}
-          onChange={(control) => onParamsChange({ ...params, control: control || undefined, page: 1 })}
+          onChange={(control) => refine({ control: control || undefined })}
           options={[{ value: '', label: 'Any range' }, ...CODE_CONTROLS.map((c) => ({ value: c, label: DTC_CONTROL_LABELS[c] }))]}
           style={{ width: 260 }}
         />
@@ -111,14 +89,7 @@ export function CodesTable({ params, onParamsChange }: CodesTableProps) {
         onChange={onChange}
         scroll={{ x: 960 }}
         locale={{ emptyText: params.q || params.system || params.control ? 'No codes match these filters' : 'The catalogue is empty' }}
-        pagination={{
-          current: params.page,
-          pageSize: params.pageSize,
-          total: codes.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: CODE_PAGE_SIZES.map(String),
-          showTotal: (total) => `${total} ${total === 1 ? 'code' : 'codes'}`,
-        }}
+        pagination={pagination(codes.data?.total ?? 0, (total) => `${total} ${total === 1 ? 'code' : 'codes'}`)}
       />
     </>
   );

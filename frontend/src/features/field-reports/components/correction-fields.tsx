@@ -1,9 +1,9 @@
 import { KNOWLEDGE_LIMITS, type CorrectionField, type PossibleCauseRowDto } from '@causeway/shared';
 import { Form, Input, InputNumber, Radio, Select, Typography } from 'antd';
 import { formatMoney } from '@/utils/money';
+import { describeScope } from '@/utils/vehicle-scope';
 import { useDecodedCode } from '../api/decode-code';
 import { useCodeCauses } from '../api/get-code-causes';
-import { describeScope } from '../utils/describe';
 import { CORRECTION_FIELD_LABELS } from '../utils/labels';
 import { causeKey } from '../utils/report-form';
 import { useParsedCode } from './code-field';

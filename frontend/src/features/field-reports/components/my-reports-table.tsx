@@ -1,12 +1,13 @@
 import { FIELD_REPORT_KINDS, FIELD_REPORT_STATUSES, type FieldReportSummaryDto } from '@causeway/shared';
-import { Alert, App, Button, Popconfirm, Table, Typography, type TableColumnsType, type TableProps } from 'antd';
+import { Alert, App, Button, Popconfirm, Table, Typography, type TableColumnsType } from 'antd';
 import { Link } from 'react-router-dom';
+import { useTableParams } from '@/hooks/use-table-params';
+import { KIND_LABELS, STATUS_LABELS } from '@/utils/field-report-labels';
 import { formatDateTime } from '@/utils/format';
 import { useMyReports } from '../api/get-my-reports';
 import { useReport } from '../api/get-report';
 import { useWithdrawReport } from '../api/withdraw-report';
-import { KIND_LABELS, STATUS_LABELS } from '../utils/labels';
-import { PAGE_SIZES, type MyReportsParams } from '../utils/list-params';
+import { MY_REPORTS_TABLE, type MyReportsParams } from '../utils/list-params';
 import { ReportStatusTag } from './report-status-tag';
 
 const visuallyHidden = { position: 'absolute', width: 1, height: 1, overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap' } as const;
@@ -36,6 +37,13 @@ type MyReportsTableProps = {
 export function MyReportsTable({ params, onParamsChange, reportPath, locale }: MyReportsTableProps) {
   const { message } = App.useApp();
   const reports = useMyReports(params);
+  const table = useTableParams(params, onParamsChange, {
+    ...MY_REPORTS_TABLE,
+    filtersOf: (filters) => ({
+      kind: FIELD_REPORT_KINDS.find((k) => k === filters.kind?.[0]),
+      status: FIELD_REPORT_STATUSES.find((s) => s === filters.status?.[0]),
+    }),
+  });
   const withdraw = useWithdrawReport({
     mutationConfig: { onSuccess: () => void message.success('Report withdrawn'), onError: (e) => void message.error(e.message) },
   });
@@ -87,16 +95,6 @@ export function MyReportsTable({ params, onParamsChange, reportPath, locale }: M
     },
   ];
 
-  const onChange: TableProps<FieldReportSummaryDto>['onChange'] = (pagination, filters, _sorter, extra) => {
-    const pageSize = pagination.pageSize ?? params.pageSize;
-    onParamsChange({
-      page: extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1,
-      pageSize,
-      kind: FIELD_REPORT_KINDS.find((k) => k === filters.kind?.[0]),
-      status: FIELD_REPORT_STATUSES.find((s) => s === filters.status?.[0]),
-    });
-  };
-
   return (
     <>
       {reports.isError && <Alert type="error" showIcon title={reports.error.message} style={{ marginBottom: 16 }} />}
@@ -105,17 +103,10 @@ export function MyReportsTable({ params, onParamsChange, reportPath, locale }: M
         columns={columns}
         dataSource={reports.data?.items ?? []}
         loading={reports.isFetching}
-        onChange={onChange}
+        onChange={table.onChange}
         scroll={{ x: 'max-content' }}
         locale={{ emptyText: params.kind || params.status ? 'No reports match these filters' : 'You have not filed a field report yet' }}
-        pagination={{
-          current: params.page,
-          pageSize: params.pageSize,
-          total: reports.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: PAGE_SIZES.map(String),
-          showTotal: (total) => `${total} ${total === 1 ? 'report' : 'reports'}`,
-        }}
+        pagination={table.pagination(reports.data?.total ?? 0, (total) => `${total} ${total === 1 ? 'report' : 'reports'}`)}
       />
     </>
   );

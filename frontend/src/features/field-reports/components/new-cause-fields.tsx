@@ -1,12 +1,13 @@
 import { KNOWLEDGE_LIMITS, PART_SYSTEMS } from '@causeway/shared';
 import { Checkbox, Col, Form, Input, InputNumber, Row, Select, Switch } from 'antd';
+import { VehicleScopeFields } from '@/components/vehicle-scope-fields';
 import { COMMON_CURRENCIES } from '@/config/locales';
+import { SYSTEM_LABELS } from '@/utils/part-systems';
+import { describeScope } from '@/utils/vehicle-scope';
 import { useCodeCauses } from '../api/get-code-causes';
 import { useParts } from '../api/get-parts';
 import { useTeardowns } from '../api/get-teardowns';
-import { describeScope, SYSTEM_LABELS } from '../utils/describe';
 import { useParsedCode } from './code-field';
-import { ScopeFields } from './scope-fields';
 import { FormSection } from './form-section';
 
 const required = (what: string) => ({ required: true, message: `Enter ${what}` });
@@ -60,7 +61,7 @@ export function NewCauseFields() {
         )}
       </FormSection>
       <FormSection title="Which vehicles">
-        <ScopeFields hint="Leave everything empty for all vehicles." />
+        <VehicleScopeFields hint="Leave everything empty for all vehicles." />
       </FormSection>
       <FormSection title="Likelihood and costs">
         <Row gutter={16}>

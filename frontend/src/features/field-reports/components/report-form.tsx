@@ -4,6 +4,7 @@ import { Alert, App, Button, Card, Flex, Form, Popconfirm, Radio, Typography, ty
 import { useState } from 'react';
 import { isApiError } from '@/lib/api-client';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
+import { KIND_LABELS } from '@/utils/field-report-labels';
 import { createReport } from '../api/create-report';
 import { useDeleteAttachment } from '../api/delete-attachment';
 import { getCodeCausesQueryOptions } from '../api/get-code-causes';
@@ -12,7 +13,7 @@ import { submitReport } from '../api/submit-report';
 import { updateReport } from '../api/update-report';
 import { uploadAttachments } from '../api/upload-attachments';
 import { useWithdrawReport } from '../api/withdraw-report';
-import { KIND_HINTS, KIND_LABELS } from '../utils/labels';
+import { KIND_HINTS } from '../utils/labels';
 import { emptyFormValues, inFormTerms, normalisedCode, reportFieldErrorOptions, toFormValues, toRequest, type FormContext, type ReportFormValues } from '../utils/report-form';
 import { CodeField } from './code-field';
 import { ConfirmedFixFields } from './confirmed-fix-fields';

@@ -8,11 +8,13 @@ import {
 } from '@causeway/shared';
 import { Descriptions, Typography, type DescriptionsProps } from 'antd';
 import type { ReactNode } from 'react';
+import { KIND_LABELS } from '@/utils/field-report-labels';
 import { formatMoney } from '@/utils/money';
+import { SYSTEM_LABELS } from '@/utils/part-systems';
+import { describeScope } from '@/utils/vehicle-scope';
 import { useCodeCauses } from '../api/get-code-causes';
 import { useParts } from '../api/get-parts';
-import { describeScope, SYSTEM_LABELS } from '../utils/describe';
-import { CORRECTION_FIELD_LABELS, KIND_LABELS } from '../utils/labels';
+import { CORRECTION_FIELD_LABELS } from '../utils/labels';
 import { causeKey } from '../utils/report-form';
 
 type ReportPayloadProps = {

@@ -1,32 +1,9 @@
-import type { CorrectionField, FieldReportKind, FieldReportStatus } from '@causeway/shared';
-
-export const KIND_LABELS: Record<FieldReportKind, string> = {
-  'confirmed-fix': 'Confirmed fix',
-  'new-cause': 'New possible cause',
-  correction: 'Correction',
-};
+import type { CorrectionField, FieldReportKind } from '@causeway/shared';
 
 export const KIND_HINTS: Record<FieldReportKind, string> = {
   'confirmed-fix': 'A fault you fixed: the code, the vehicle, the part that fixed it and what you tried first.',
   'new-cause': 'A part that sets this code and is not yet listed as a possible cause, with its costs.',
   correction: "A part cost or labour time that is off, or a code's title or description that needs fixing.",
-};
-
-export const STATUS_LABELS: Record<FieldReportStatus, string> = {
-  draft: 'Draft',
-  submitted: 'Waiting for review',
-  approved: 'Approved',
-  rejected: 'Rejected',
-  withdrawn: 'Withdrawn',
-};
-
-/** Tag colours: teal for the good outcome, red for a rejection, neutral otherwise (amber is for safety only). */
-export const STATUS_COLOURS: Record<FieldReportStatus, string | undefined> = {
-  draft: undefined,
-  submitted: 'processing',
-  approved: 'success',
-  rejected: 'error',
-  withdrawn: undefined,
 };
 
 export const CORRECTION_FIELD_LABELS: Record<CorrectionField, string> = {

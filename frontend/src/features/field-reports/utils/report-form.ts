@@ -17,6 +17,7 @@ import {
 import { ApiError, isApiError } from '@/lib/api-client';
 import type { FieldErrorOptions } from '@/lib/form-errors';
 import { fromMinorUnits, toMinorUnits } from '@/utils/money';
+import { scopeOf } from '@/utils/vehicle-scope';
 
 /** What the report form holds; each kind reads its own fields. */
 export interface ReportFormValues {
@@ -134,11 +135,7 @@ export function toRequest(values: ReportFormValues, ctx: FormContext, causes: Po
       check: values.withCheck
         ? { description: values.checkDescription?.trim() ?? '', hours: values.checkHours ?? Number.NaN, mustPrecede: values.checkMustPrecede ?? false }
         : null,
-      make: blank(values.make),
-      model: blank(values.model),
-      engine: blank(values.engine),
-      yearFrom: values.yearFrom ?? null,
-      yearTo: values.yearTo ?? null,
+      ...scopeOf(values),
       notes: values.notes?.trim() ?? '',
       codeTitle: blank(values.codeTitle),
     };

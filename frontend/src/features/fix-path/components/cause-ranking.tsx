@@ -1,8 +1,8 @@
 import type { CauseRankingDto, RankedCauseDto } from '@causeway/shared';
 import { Alert, Skeleton, Table, Tag, Typography, type TableColumnsType } from 'antd';
 import { lazy, Suspense } from 'react';
+import { systemLabel } from '@/utils/part-systems';
 import { hours, money } from '../utils/format';
-import { systemLabel } from '../utils/systems';
 import { describeVehicle } from '../utils/vehicle';
 import { Probability } from './probability';
 

@@ -1,11 +1,12 @@
-import { JOB_SORTS, formatMoney, type JobSort, type JobSummaryDto } from '@causeway/shared';
-import { Alert, Space, Table, Tag, Typography, type TableColumnsType, type TableProps } from 'antd';
+import { formatMoney, type JobSummaryDto } from '@causeway/shared';
+import { Alert, Space, Table, Tag, Typography, type TableColumnsType } from 'antd';
 import { Link } from 'react-router-dom';
 import { palette } from '@/config/theme';
+import { useTableParams } from '@/hooks/use-table-params';
 import { formatDate } from '@/utils/format';
 import { useJobs } from '../api/get-jobs';
 import { CODE_STATUS_LABELS, jobStatusLabel, vehicleLabel } from '../utils/labels';
-import { JOB_PAGE_SIZES, type JobListParams } from '../utils/list-params';
+import { JOB_TABLE, type JobListParams } from '../utils/list-params';
 
 type JobsTableProps = {
   params: JobListParams;
@@ -16,11 +17,6 @@ type JobsTableProps = {
   hideVehicle?: boolean;
 };
 
-function sortOrderOf(params: JobListParams, field: JobSort): 'ascend' | 'descend' | null {
-  if (params.sort !== field) return null;
-  return params.order === 'asc' ? 'ascend' : 'descend';
-}
-
 export function JobStatusTag({ job }: { job: Pick<JobSummaryDto, 'status' | 'resolution'> }) {
   const color = job.status === 'open' ? palette.teal600 : job.resolution === 'resolved' ? palette.green : palette.grey700;
   return <Tag color={color}>{jobStatusLabel(job.status, job.resolution)}</Tag>;
@@ -29,7 +25,7 @@ export function JobStatusTag({ job }: { job: Pick<JobSummaryDto, 'status' | 'res
 /** The shop's jobs, filtered, sorted and paged on the server. */
 export function JobsTable({ params, onParamsChange, locale, jobHref, hideVehicle = false }: JobsTableProps) {
   const jobs = useJobs(params);
-  const sortable = (field: JobSort) => ({ key: field, sorter: true, sortOrder: sortOrderOf(params, field) });
+  const { sortable, onChange, pagination } = useTableParams(params, onParamsChange, JOB_TABLE);
 
   const columns: TableColumnsType<JobSummaryDto> = [
     { title: 'Opened', dataIndex: 'openedAt', ...sortable('openedAt'), render: (iso: string, job) => <Link to={jobHref(job.id)}>{formatDate(iso, locale)}</Link> },
@@ -95,20 +91,6 @@ export function JobsTable({ params, onParamsChange, locale, jobHref, hideVehicle
     { title: 'Closed', dataIndex: 'closedAt', ...sortable('closedAt'), render: (iso: string | null) => (iso ? formatDate(iso, locale) : '—') },
   ];
 
-  const onChange: TableProps<JobSummaryDto>['onChange'] = (pagination, _filters, sorter, extra) => {
-    const { columnKey, order } = (Array.isArray(sorter) ? sorter[0] : sorter) ?? {};
-    const sortField = JOB_SORTS.find((f) => f === columnKey);
-    const pageSize = pagination.pageSize ?? params.pageSize;
-    const page = extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1;
-    onParamsChange({
-      ...params,
-      page,
-      pageSize,
-      sort: order && sortField ? sortField : undefined,
-      order: order && sortField ? (order === 'descend' ? 'desc' : 'asc') : undefined,
-    });
-  };
-
   return (
     <>
       {jobs.isError && <Alert type="error" showIcon title={jobs.error.message} style={{ marginBottom: 16 }} />}
@@ -120,14 +102,7 @@ export function JobsTable({ params, onParamsChange, locale, jobHref, hideVehicle
         onChange={onChange}
         scroll={{ x: 'max-content' }}
         locale={{ emptyText: 'No jobs match these filters' }}
-        pagination={{
-          current: params.page,
-          pageSize: params.pageSize,
-          total: jobs.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: JOB_PAGE_SIZES.map(String),
-          showTotal: (total) => `${total} ${total === 1 ? 'job' : 'jobs'}`,
-        }}
+        pagination={pagination(jobs.data?.total ?? 0, (total) => `${total} ${total === 1 ? 'job' : 'jobs'}`)}
       />
     </>
   );

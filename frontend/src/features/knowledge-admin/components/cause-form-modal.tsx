@@ -1,14 +1,14 @@
 import { KNOWLEDGE_LIMITS, parseDtc, type PartDto, type PossibleCauseRowDto, type TeardownDto } from '@causeway/shared';
 import { Alert, App, Checkbox, Col, Form, Input, InputNumber, Modal, Row, Select, Switch } from 'antd';
 import { useState } from 'react';
+import { VehicleScopeFields } from '@/components/vehicle-scope-fields';
 import { COMMON_CURRENCIES } from '@/config/locales';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
 import { fromMinorUnits, toMinorUnits } from '@/utils/money';
+import { describeScope, SCOPE_LABELS, scopeOf, type ScopeValues } from '@/utils/vehicle-scope';
 import { useCreateCause } from '../api/create-cause';
 import { useUpdateCause } from '../api/update-cause';
-import { describeScope } from '../utils/describe';
 import { inFormTerms } from '../utils/errors';
-import { SCOPE_LABELS, ScopeFields, scopeOf, type ScopeValues } from './scope-fields';
 
 interface CauseValues extends ScopeValues {
   code: string;
@@ -177,7 +177,7 @@ export function CauseFormModal({ cause, code, currency, parts, teardowns, open, 
           <Select
             allowClear
             showSearch={{ optionFilterProp: 'label' }}
-            options={teardowns.map((t) => ({ value: t.key, label: `${t.name} — ${t.hours} h, ${describeScope(t)}` }))}
+            options={teardowns.map((t) => ({ value: t.key, label: `${t.name} — ${t.hours} h, ${describeScope(t, { capitalised: true })}` }))}
             onClear={() => form.setFieldValue('teardownKey', null)}
           />
         </Form.Item>
@@ -203,7 +203,7 @@ export function CauseFormModal({ cause, code, currency, parts, teardowns, open, 
             </Col>
           </Row>
         )}
-        <ScopeFields />
+        <VehicleScopeFields legend="Which vehicles (empty: all)" />
       </Form>
     </Modal>
   );

@@ -2,11 +2,11 @@ import { PlusOutlined } from '@ant-design/icons';
 import { formatMoney, formatPercent, parseDtc, type PossibleCauseRowDto } from '@causeway/shared';
 import { Alert, App, Button, Flex, Input, List, Popconfirm, Table, Typography, type TableColumnsType } from 'antd';
 import { useState } from 'react';
+import { describeScope, scopeKeyOf } from '@/utils/vehicle-scope';
 import { useDeleteCause } from '../api/delete-cause';
 import { useCauses } from '../api/get-causes';
 import { useParts } from '../api/get-parts';
 import { useTeardowns } from '../api/get-teardowns';
-import { describeScope, scopeKeyOf } from '../utils/describe';
 import { CauseFormModal } from './cause-form-modal';
 import { CodeFormModal } from './code-form-modal';
 
@@ -30,7 +30,7 @@ function scopeSums(rows: PossibleCauseRowDto[]): ScopeSum[] {
   const sums = new Map<string, ScopeSum>();
   for (const r of rows) {
     const key = `${r.code}|${scopeKeyOf(r)}`;
-    const s = sums.get(key) ?? { key, code: r.code, scope: describeScope(r), sum: 0 };
+    const s = sums.get(key) ?? { key, code: r.code, scope: describeScope(r, { capitalised: true }), sum: 0 };
     s.sum += r.prior;
     sums.set(key, s);
   }
@@ -53,7 +53,7 @@ export function CausesTable({ code, page, onCodeChange, onPageChange, locale, cu
   const columns: TableColumnsType<PossibleCauseRowDto> = [
     { title: 'Code', key: 'code', render: (_: unknown, c) => <Typography.Text code>{c.code}</Typography.Text> },
     { title: 'Part', key: 'part', render: (_: unknown, c) => c.partName },
-    { title: 'Vehicles', key: 'scope', render: (_: unknown, c) => describeScope(c) },
+    { title: 'Vehicles', key: 'scope', render: (_: unknown, c) => describeScope(c, { capitalised: true }) },
     { title: 'Prior', key: 'prior', align: 'right', render: (_: unknown, c) => new Intl.NumberFormat(locale, { style: 'percent', maximumFractionDigits: 1 }).format(c.prior) },
     { title: 'Part cost', key: 'cost', align: 'right', render: (_: unknown, c) => formatMoney(c.partCostMinor, c.currency, locale) },
     { title: 'Labour', key: 'hours', align: 'right', render: (_: unknown, c) => `${new Intl.NumberFormat(locale).format(c.replaceHours)} h` },
@@ -93,12 +93,12 @@ export function CausesTable({ code, page, onCodeChange, onPageChange, locale, cu
               setEditing(c);
               setOpen(true);
             }}
-            aria-label={`Edit ${c.partName} for ${c.code}, ${describeScope(c)}`}
+            aria-label={`Edit ${c.partName} for ${c.code}, ${describeScope(c, { capitalised: true })}`}
           >
             Edit
           </Button>
           <Popconfirm title={`Remove ${c.partName} from ${c.code}?`} description="Its outcomes stay recorded." okText="Remove" okButtonProps={{ danger: true }} cancelText="Keep it" onConfirm={() => remove.mutate(c.id)}>
-            <Button type="link" danger aria-label={`Remove ${c.partName} for ${c.code}, ${describeScope(c)}`}>
+            <Button type="link" danger aria-label={`Remove ${c.partName} for ${c.code}, ${describeScope(c, { capitalised: true })}`}>
               Remove
             </Button>
           </Popconfirm>

@@ -2,9 +2,9 @@ import { PART_SYSTEMS, type PartDto, type PartSystem } from '@causeway/shared';
 import { Alert, App, Form, Input, Modal, Select } from 'antd';
 import { useState } from 'react';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
+import { SYSTEM_LABELS } from '@/utils/part-systems';
 import { useCreatePart } from '../api/create-part';
 import { useUpdatePart } from '../api/update-part';
-import { SYSTEM_LABELS } from '../utils/describe';
 
 interface PartValues {
   key: string;

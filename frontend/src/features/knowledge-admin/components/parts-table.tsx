@@ -2,8 +2,8 @@ import { PlusOutlined } from '@ant-design/icons';
 import type { PartDto } from '@causeway/shared';
 import { Alert, Button, Flex, Input, Table, Typography, type TableColumnsType } from 'antd';
 import { useState } from 'react';
+import { systemLabel } from '@/utils/part-systems';
 import { useParts } from '../api/get-parts';
-import { systemLabel } from '../utils/describe';
 import { PartFormModal } from './part-form-modal';
 
 type PartsTableProps = { q: string; page: number; onQueryChange: (q: string) => void; onPageChange: (page: number) => void };

@@ -1,11 +1,12 @@
 import { KNOWLEDGE_LIMITS, type TeardownDto } from '@causeway/shared';
 import { Alert, App, Form, Input, InputNumber, Modal, Select } from 'antd';
 import { useState } from 'react';
+import { VehicleScopeFields } from '@/components/vehicle-scope-fields';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
+import { SCOPE_LABELS, scopeOf, type ScopeValues } from '@/utils/vehicle-scope';
 import { useCreateTeardown } from '../api/create-teardown';
 import { useUpdateTeardown } from '../api/update-teardown';
 import { inFormTerms } from '../utils/errors';
-import { SCOPE_LABELS, ScopeFields, scopeOf, type ScopeValues } from './scope-fields';
 
 interface TeardownValues extends ScopeValues {
   key: string;
@@ -72,7 +73,7 @@ export function TeardownFormModal({ teardown, open, onClose, knownCautions }: Te
         <Form.Item name="hours" label="Hours to take apart and put back" rules={[{ required: true, message: 'Enter the hours' }]} style={{ maxWidth: 280 }}>
           <InputNumber min={0} max={KNOWLEDGE_LIMITS.hoursMax} step={0.1} suffix="h" style={{ width: '100%' }} />
         </Form.Item>
-        <ScopeFields />
+        <VehicleScopeFields legend="Which vehicles (empty: all)" />
         <Form.Item name="cautions" label="Safety cautions (keys)">
           <Select mode="tags" options={knownCautions.map((c) => ({ value: c, label: c }))} tokenSeparators={[',', ' ']} />
         </Form.Item>

@@ -2,8 +2,8 @@ import { PlusOutlined } from '@ant-design/icons';
 import type { TeardownDto } from '@causeway/shared';
 import { Alert, Button, Flex, Input, Table, Tag, Typography, type TableColumnsType } from 'antd';
 import { useState } from 'react';
+import { describeScope } from '@/utils/vehicle-scope';
 import { useTeardowns } from '../api/get-teardowns';
-import { describeScope } from '../utils/describe';
 import { TeardownFormModal } from './teardown-form-modal';
 
 type TeardownsTableProps = { q: string; page: number; onQueryChange: (q: string) => void; onPageChange: (page: number) => void; locale: string };
@@ -20,7 +20,7 @@ export function TeardownsTable({ q, page, onQueryChange, onPageChange, locale }:
     { title: 'Name', key: 'name', render: (_: unknown, t) => <div style={{ maxWidth: 380 }}>{t.name}</div> },
     { title: 'Key', key: 'key', render: (_: unknown, t) => <Typography.Text code>{t.key}</Typography.Text> },
     { title: 'Hours', key: 'hours', align: 'right', render: (_: unknown, t) => `${new Intl.NumberFormat(locale).format(t.hours)} h` },
-    { title: 'Vehicles', key: 'scope', render: (_: unknown, t) => describeScope(t) },
+    { title: 'Vehicles', key: 'scope', render: (_: unknown, t) => describeScope(t, { capitalised: true }) },
     { title: 'Safety cautions', key: 'cautions', render: (_: unknown, t) => t.cautions.map((c) => <Tag key={c}>{c}</Tag>) },
     {
       title: 'Actions',

@@ -2,24 +2,9 @@ import { KNOWLEDGE_LIMITS, PART_SYSTEMS, type FieldReportDto, type NewCausePaylo
 import { Alert, Button, Card, Col, Form, Input, Row, Select } from 'antd';
 import { useState } from 'react';
 import { applyFieldErrors, formAlertMessage } from '@/lib/form-errors';
+import { SYSTEM_LABELS } from '@/utils/part-systems';
 import { useApproveReport } from '../api/approve-report';
 import { useRejectReport } from '../api/reject-report';
-
-const SYSTEM_LABELS: Record<PartSystem, string> = {
-  fuel: 'Fuel',
-  ignition: 'Ignition',
-  'air-intake': 'Air intake',
-  'fuel-injection': 'Fuel injection',
-  exhaust: 'Exhaust',
-  evap: 'Evaporative emissions (EVAP)',
-  hybrid: 'Hybrid high-voltage system',
-  srs: 'Airbags (SRS)',
-  brakes: 'Brakes',
-  network: 'Network',
-  cooling: 'Cooling',
-  electrical: 'Electrical',
-  'engine-mechanical': 'Engine mechanical',
-};
 
 type DecisionPanelProps = {
   report: ReviewReportDto;

@@ -1,11 +1,12 @@
 import { FIELD_REPORT_KINDS, parseDtc, type FieldReportKind, type FieldReportSummaryDto } from '@causeway/shared';
-import { Alert, Flex, Input, Select, Table, Tag, Typography, type TableColumnsType, type TableProps } from 'antd';
+import { Alert, Flex, Input, Select, Table, Tag, Typography, type TableColumnsType } from 'antd';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
+import { useTableParams } from '@/hooks/use-table-params';
+import { KIND_LABELS, STATUS_COLOURS, STATUS_LABELS } from '@/utils/field-report-labels';
 import { formatDateTime } from '@/utils/format';
 import { useReviewQueue } from '../api/get-review-queue';
-import { KIND_LABELS, STATUS_COLOURS, STATUS_LABELS } from '../utils/labels';
-import { PAGE_SIZES, QUEUE_STATUSES, type QueueParams, type QueueStatus } from '../utils/queue-params';
+import { QUEUE_STATUSES, QUEUE_TABLE, type QueueParams, type QueueStatus } from '../utils/queue-params';
 
 type ReviewQueueTableProps = {
   params: QueueParams;
@@ -16,6 +17,7 @@ type ReviewQueueTableProps = {
 
 export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }: ReviewQueueTableProps) {
   const queue = useReviewQueue(params);
+  const table = useTableParams(params, onParamsChange, QUEUE_TABLE);
   const [codeError, setCodeError] = useState<string | null>(null);
   const waiting = params.status === 'submitted';
 
@@ -47,11 +49,6 @@ export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }:
     { title: 'Status', key: 'status', render: (_: unknown, r) => <Tag color={STATUS_COLOURS[r.status]}>{STATUS_LABELS[r.status]}</Tag> },
   ];
 
-  const onChange: TableProps<FieldReportSummaryDto>['onChange'] = (pagination, _filters, _sorter, extra) => {
-    const pageSize = pagination.pageSize ?? params.pageSize;
-    onParamsChange({ ...params, pageSize, page: extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1 });
-  };
-
   return (
     <>
       <Flex gap={16} wrap align="flex-start" style={{ marginBottom: 16 }} role="search" aria-label="Filter the queue">
@@ -62,7 +59,7 @@ export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }:
           <Select<QueueStatus>
             aria-label="Status"
             value={params.status}
-            onChange={(status) => onParamsChange({ ...params, status, page: 1 })}
+            onChange={(status) => table.refine({ status })}
             options={QUEUE_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))}
             style={{ minWidth: 220 }}
           />
@@ -74,7 +71,7 @@ export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }:
           <Select<FieldReportKind | 'all'>
             aria-label="Kind"
             value={params.kind ?? 'all'}
-            onChange={(kind) => onParamsChange({ ...params, kind: kind === 'all' ? undefined : kind, page: 1 })}
+            onChange={(kind) => table.refine({ kind: kind === 'all' ? undefined : kind })}
             options={[{ value: 'all', label: 'Every kind' }, ...FIELD_REPORT_KINDS.map((k) => ({ value: k, label: KIND_LABELS[k] }))]}
             style={{ minWidth: 220 }}
           />
@@ -96,7 +93,7 @@ export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }:
               const text = value.trim();
               if (!text) {
                 setCodeError(null);
-                onParamsChange({ ...params, code: '', page: 1 });
+                table.refine({ code: '' });
                 return;
               }
               const parsed = parseDtc(text);
@@ -105,7 +102,7 @@ export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }:
                 return;
               }
               setCodeError(null);
-              onParamsChange({ ...params, code: parsed.value.code, page: 1 });
+              table.refine({ code: parsed.value.code });
             }}
             style={{ width: 280 }}
           />
@@ -122,17 +119,10 @@ export function ReviewQueueTable({ params, onParamsChange, reportPath, locale }:
         columns={columns}
         dataSource={queue.data?.items ?? []}
         loading={queue.isFetching}
-        onChange={onChange}
+        onChange={table.onChange}
         scroll={{ x: 'max-content' }}
         locale={{ emptyText: waiting ? 'Nothing is waiting for review' : 'No reports match these filters' }}
-        pagination={{
-          current: params.page,
-          pageSize: params.pageSize,
-          total: queue.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: PAGE_SIZES.map(String),
-          showTotal: (total) => `${total} ${total === 1 ? 'report' : 'reports'}`,
-        }}
+        pagination={table.pagination(queue.data?.total ?? 0, (total) => `${total} ${total === 1 ? 'report' : 'reports'}`)}
       />
     </>
   );

@@ -1,10 +1,11 @@
 import { ROLES, type Role, type UserDto } from '@causeway/shared';
-import { Alert, App, Input, Select, Space, Switch, Table, Tag, Typography, type TableColumnsType, type TableProps } from 'antd';
+import { Alert, App, Input, Select, Space, Switch, Table, Tag, Typography, type TableColumnsType } from 'antd';
 import { ROLE_LABELS } from '@/config/roles';
+import { useTableParams } from '@/hooks/use-table-params';
 import { formatDate } from '@/utils/format';
 import { useUpdateUser } from '../api/update-user';
 import { useUsers } from '../api/get-users';
-import { PAGE_SIZES, USER_SORT_FIELDS, type UserListParams, type UserSortField } from '../utils/list-params';
+import { USER_TABLE, type UserListParams } from '../utils/list-params';
 
 type UsersTableProps = {
   params: UserListParams;
@@ -14,14 +15,10 @@ type UsersTableProps = {
   locale: string;
 };
 
-function sortOrderOf(params: UserListParams, field: UserSortField) {
-  if (params.sort !== field) return null;
-  return params.order === 'desc' ? 'descend' : 'ascend';
-}
-
 export function UsersTable({ params, onParamsChange, currentUserId, locale }: UsersTableProps) {
   const { message } = App.useApp();
   const users = useUsers(params);
+  const table = useTableParams(params, onParamsChange, { ...USER_TABLE, filtersOf: (filters) => ({ role: ROLES.find((r) => r === filters.role?.[0]) }) });
   const update = useUpdateUser({
     mutationConfig: {
       onSuccess: (user, { data }) => {
@@ -35,14 +32,12 @@ export function UsersTable({ params, onParamsChange, currentUserId, locale }: Us
   const busyId = update.isPending ? update.variables?.id : undefined;
 
   const columns: TableColumnsType<UserDto> = [
-    { title: 'Name', dataIndex: 'displayName', key: 'displayName', sorter: true, sortOrder: sortOrderOf(params, 'displayName') },
-    { title: 'E-mail', dataIndex: 'email', key: 'email', sorter: true, sortOrder: sortOrderOf(params, 'email') },
+    { title: 'Name', dataIndex: 'displayName', ...table.sortable('displayName') },
+    { title: 'E-mail', dataIndex: 'email', ...table.sortable('email') },
     { title: 'Shop', key: 'shop', render: (_: unknown, user) => user.shop?.name ?? <Typography.Text type="secondary">None</Typography.Text> },
     {
       title: 'Role',
-      key: 'role',
-      sorter: true,
-      sortOrder: sortOrderOf(params, 'role'),
+      ...table.sortable('role'),
       filters: ROLES.map((r) => ({ text: ROLE_LABELS[r], value: r })),
       filterMultiple: false,
       filteredValue: params.role ? [params.role] : null,
@@ -60,7 +55,7 @@ export function UsersTable({ params, onParamsChange, currentUserId, locale }: Us
         </Space>
       ),
     },
-    { title: 'Joined', dataIndex: 'createdAt', key: 'createdAt', sorter: true, sortOrder: sortOrderOf(params, 'createdAt'), render: (iso: string) => formatDate(iso, locale) },
+    { title: 'Joined', dataIndex: 'createdAt', ...table.sortable('createdAt'), render: (iso: string) => formatDate(iso, locale) },
     {
       title: 'Active',
       key: 'disabled',
@@ -78,23 +73,6 @@ export function UsersTable({ params, onParamsChange, currentUserId, locale }: Us
     },
   ];
 
-  const onChange: TableProps<UserDto>['onChange'] = (pagination, filters, sorter, extra) => {
-    const { columnKey, order } = (Array.isArray(sorter) ? sorter[0] : sorter) ?? {};
-    const sortField = USER_SORT_FIELDS.find((f) => f === columnKey);
-    const role = ROLES.find((r) => r === filters.role?.[0]);
-    const pageSize = pagination.pageSize ?? params.pageSize;
-    // A new order, filter or page size starts again at the first page.
-    const page = extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1;
-    onParamsChange({
-      ...params,
-      page,
-      pageSize,
-      sort: order && sortField ? sortField : undefined,
-      order: order && sortField ? (order === 'descend' ? 'desc' : 'asc') : undefined,
-      role,
-    });
-  };
-
   return (
     <>
       <Input.Search
@@ -104,7 +82,7 @@ export function UsersTable({ params, onParamsChange, currentUserId, locale }: Us
         aria-label="Search users by name or e-mail"
         allowClear
         enterButton="Search"
-        onSearch={(q) => onParamsChange({ ...params, q: q.trim(), page: 1 })}
+        onSearch={(q) => table.refine({ q: q.trim() })}
         style={{ maxWidth: 480, marginBottom: 16 }}
       />
       {users.isError && <Alert type="error" showIcon title={users.error.message} style={{ marginBottom: 16 }} />}
@@ -113,17 +91,10 @@ export function UsersTable({ params, onParamsChange, currentUserId, locale }: Us
         columns={columns}
         dataSource={users.data?.items ?? []}
         loading={users.isFetching}
-        onChange={onChange}
+        onChange={table.onChange}
         scroll={{ x: 'max-content' }}
         locale={{ emptyText: params.q ? `No users match "${params.q}"` : 'No users' }}
-        pagination={{
-          current: params.page,
-          pageSize: params.pageSize,
-          total: users.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: PAGE_SIZES.map(String),
-          showTotal: (total) => `${total} ${total === 1 ? 'user' : 'users'}`,
-        }}
+        pagination={table.pagination(users.data?.total ?? 0, (total) => `${total} ${total === 1 ? 'user' : 'users'}`)}
       />
     </>
   );

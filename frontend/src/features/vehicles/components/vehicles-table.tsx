@@ -1,10 +1,11 @@
-import { VEHICLE_SORTS, type VehicleDto, type VehicleSort } from '@causeway/shared';
-import { Alert, Input, Table, Typography, type TableColumnsType, type TableProps } from 'antd';
+import type { VehicleDto } from '@causeway/shared';
+import { Alert, Input, Table, Typography, type TableColumnsType } from 'antd';
 import { Link } from 'react-router-dom';
+import { useTableParams } from '@/hooks/use-table-params';
 import { formatDate } from '@/utils/format';
 import { useVehicles } from '../api/get-vehicles';
 import { formatDistance } from '../utils/odometer';
-import { VEHICLE_PAGE_SIZES, type VehicleListParams } from '../utils/list-params';
+import { VEHICLE_TABLE, type VehicleListParams } from '../utils/list-params';
 
 type VehiclesTableProps = {
   params: VehicleListParams;
@@ -14,17 +15,12 @@ type VehiclesTableProps = {
   vehicleHref: (id: string) => string;
 };
 
-function sortOrderOf(params: VehicleListParams, field: VehicleSort): 'ascend' | 'descend' | null {
-  if (params.sort !== field) return null;
-  return params.order === 'desc' ? 'descend' : 'ascend';
-}
-
 const mono = { fontFamily: 'ui-monospace, SFMono-Regular, Menlo, monospace' } as const;
 
 /** The shop's vehicles: searched, sorted and paged on the server, all of it kept in the address. */
 export function VehiclesTable({ params, onParamsChange, locale, vehicleHref }: VehiclesTableProps) {
   const vehicles = useVehicles(params);
-  const sortable = (field: VehicleSort) => ({ key: field, sorter: true, sortOrder: sortOrderOf(params, field) });
+  const { sortable, onChange, refine, pagination } = useTableParams(params, onParamsChange, VEHICLE_TABLE);
 
   const columns: TableColumnsType<VehicleDto> = [
     {
@@ -66,20 +62,6 @@ export function VehiclesTable({ params, onParamsChange, locale, vehicleHref }: V
     { title: 'Last changed', dataIndex: 'updatedAt', ...sortable('updatedAt'), render: (iso: string) => formatDate(iso, locale) },
   ];
 
-  const onChange: TableProps<VehicleDto>['onChange'] = (pagination, _filters, sorter, extra) => {
-    const { columnKey, order } = (Array.isArray(sorter) ? sorter[0] : sorter) ?? {};
-    const sortField = VEHICLE_SORTS.find((f) => f === columnKey);
-    const pageSize = pagination.pageSize ?? params.pageSize;
-    const page = extra.action === 'paginate' && pageSize === params.pageSize ? (pagination.current ?? 1) : 1;
-    onParamsChange({
-      ...params,
-      page,
-      pageSize,
-      sort: order && sortField ? sortField : undefined,
-      order: order && sortField ? (order === 'descend' ? 'desc' : 'asc') : undefined,
-    });
-  };
-
   return (
     <>
       <Input.Search
@@ -89,7 +71,7 @@ export function VehiclesTable({ params, onParamsChange, locale, vehicleHref }: V
         aria-label="Search vehicles by VIN, plate or owner"
         allowClear
         enterButton="Search"
-        onSearch={(q) => onParamsChange({ ...params, q: q.trim(), page: 1 })}
+        onSearch={(q) => refine({ q: q.trim() })}
         style={{ maxWidth: 520, marginBottom: 16 }}
       />
       {vehicles.isError && <Alert type="error" showIcon title={vehicles.error.message} style={{ marginBottom: 16 }} />}
@@ -101,14 +83,7 @@ export function VehiclesTable({ params, onParamsChange, locale, vehicleHref }: V
         onChange={onChange}
         scroll={{ x: 'max-content' }}
         locale={{ emptyText: params.q ? `No vehicle matches "${params.q}"` : 'No vehicles yet: add the first one.' }}
-        pagination={{
-          current: params.page,
-          pageSize: params.pageSize,
-          total: vehicles.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: VEHICLE_PAGE_SIZES.map(String),
-          showTotal: (total) => `${total} ${total === 1 ? 'vehicle' : 'vehicles'}`,
-        }}
+        pagination={pagination(vehicles.data?.total ?? 0, (total) => `${total} ${total === 1 ? 'vehicle' : 'vehicles'}`)}
       />
     </>
   );

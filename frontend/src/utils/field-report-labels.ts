@@ -1,5 +1,6 @@
 import type { FieldReportKind, FieldReportStatus } from '@causeway/shared';
 
+/** A field report's kind and status in words, for the author's pages and the review desk alike. */
 export const KIND_LABELS: Record<FieldReportKind, string> = {
   'confirmed-fix': 'Confirmed fix',
   'new-cause': 'New possible cause',
@@ -14,6 +15,7 @@ export const STATUS_LABELS: Record<FieldReportStatus, string> = {
   withdrawn: 'Withdrawn',
 };
 
+/** Tag colours: teal for the good outcome, red for a rejection, neutral otherwise (amber is for safety only). */
 export const STATUS_COLOURS: Record<FieldReportStatus, string | undefined> = {
   draft: undefined,
   submitted: 'processing',

@@ -1,13 +1,14 @@
 import type { PartSystem } from '@causeway/shared';
 
-const SYSTEM_LABELS: Record<PartSystem, string> = {
+/** A part's system in words, as the pickers and tables show it. */
+export const SYSTEM_LABELS: Record<PartSystem, string> = {
   fuel: 'Fuel',
   ignition: 'Ignition',
   'air-intake': 'Air intake',
   'fuel-injection': 'Fuel injection',
   exhaust: 'Exhaust',
-  evap: 'Evaporative emission (EVAP)',
-  hybrid: 'Hybrid high-voltage',
+  evap: 'Evaporative emissions (EVAP)',
+  hybrid: 'Hybrid high-voltage system',
   srs: 'Airbags (SRS)',
   brakes: 'Brakes',
   network: 'Network',
