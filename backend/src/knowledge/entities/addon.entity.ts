@@ -1,9 +1,10 @@
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { Teardown } from './teardown.entity';
+import { VehicleScoped } from './vehicle-scoped';
 
 /** Due maintenance that shares a teardown: done "while it is apart" it costs only its part and own labour. */
 @Entity('addons')
-export class AddOn {
+export class AddOn extends VehicleScoped {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
@@ -29,19 +30,4 @@ export class AddOn {
   /** Its own labour hours, excluding the teardown. */
   @Column('double precision')
   hours: number;
-
-  @Column({ type: 'varchar', length: 40, nullable: true })
-  make: string | null;
-
-  @Column({ type: 'varchar', length: 60, nullable: true })
-  model: string | null;
-
-  @Column({ type: 'varchar', length: 60, nullable: true })
-  engine: string | null;
-
-  @Column({ type: 'integer', nullable: true })
-  yearFrom: number | null;
-
-  @Column({ type: 'integer', nullable: true })
-  yearTo: number | null;
 }

@@ -1,11 +1,12 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { Part } from './part.entity';
 import { Teardown } from './teardown.entity';
+import { VehicleScoped } from './vehicle-scoped';
 
 /** One possible cause of one code for one vehicle scope: a part, its prior weight, costs, check and teardown. */
 @Entity('possible_causes')
 @Index('IDX_possible_causes_code', ['code'])
-export class PossibleCause {
+export class PossibleCause extends VehicleScoped {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
@@ -51,20 +52,4 @@ export class PossibleCause {
   /** Must be found by the check before it may be replaced (wiring faults, costly repairs). */
   @Column({ default: false })
   checkMustPrecede: boolean;
-
-  /** Vehicle scope; null = any. */
-  @Column({ type: 'varchar', length: 40, nullable: true })
-  make: string | null;
-
-  @Column({ type: 'varchar', length: 60, nullable: true })
-  model: string | null;
-
-  @Column({ type: 'varchar', length: 60, nullable: true })
-  engine: string | null;
-
-  @Column({ type: 'integer', nullable: true })
-  yearFrom: number | null;
-
-  @Column({ type: 'integer', nullable: true })
-  yearTo: number | null;
 }

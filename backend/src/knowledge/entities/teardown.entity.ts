@@ -1,8 +1,9 @@
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { VehicleScoped } from './vehicle-scoped';
 
 /** What must be taken apart to reach parts, shared between possible causes (O_g of the fix path). */
 @Entity('teardowns')
-export class Teardown {
+export class Teardown extends VehicleScoped {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
@@ -15,22 +16,6 @@ export class Teardown {
   /** Labour hours to take apart and put back. */
   @Column('double precision')
   hours: number;
-
-  /** Vehicle scope; null = any. */
-  @Column({ type: 'varchar', length: 40, nullable: true })
-  make: string | null;
-
-  @Column({ type: 'varchar', length: 60, nullable: true })
-  model: string | null;
-
-  @Column({ type: 'varchar', length: 60, nullable: true })
-  engine: string | null;
-
-  @Column({ type: 'integer', nullable: true })
-  yearFrom: number | null;
-
-  @Column({ type: 'integer', nullable: true })
-  yearTo: number | null;
 
   /** Caution keys (safety_cautions.key). */
   @Column('simple-json')
