@@ -277,6 +277,7 @@ export class KnowledgeService {
       cautions: await this.codes.cautionsFor(cautionKeys),
       deferTo: DEFER_TO_PROCEDURE,
       addOns,
+      addOnCosts: [...addOnInfo.values()].map((a) => ({ key: a.row.key, partCost: a.partCost, hours: a.row.hours })),
       excluded,
       notListed,
       indicative: causes.some((c) => c.partCost.indicative) || addOns.some((a) => a.partCost.indicative),

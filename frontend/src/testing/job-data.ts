@@ -68,6 +68,7 @@ export function makeFixPath(code: string, causes: TestCause[], extra: Partial<Pi
     cautions: [FUEL_CAUTION],
     deferTo: "Follow the vehicle maker's procedure, local regulations and licensed practice.",
     addOns: [],
+    addOnCosts: [],
     excluded: [],
     notListed: [],
     indicative: false,

@@ -221,6 +221,8 @@ export interface FixPathDto {
   cautions: CautionDto[];
   deferTo: string;
   addOns: FixPathAddOnDto[];
+  /** Part price and own hours of every add-on in `input.addOns`, reached by the path or not, so a client can re-cost them at another labour rate. */
+  addOnCosts: Array<{ key: string; partCost: ConvertedMoney; hours: number }>;
   /** Part keys ruled out in this job and left out of the path. */
   excluded: string[];
   /** Part keys asked to be excluded that are not possible causes of this code for this vehicle (ignored). */

@@ -111,6 +111,7 @@ export function makeFixPath(): FixPathDto {
       savedMinor: a.savedCost,
       savedHours: 1.9,
     })),
+    addOnCosts: [{ key: 'fuel-filter', partCost: { minor: 3_500, currency: 'GBP', original: null, indicative: false }, hours: 0.3 }],
     excluded: [],
     notListed: [],
     indicative: false,

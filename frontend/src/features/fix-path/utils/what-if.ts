@@ -32,7 +32,7 @@ export function whatIfInput(dto: FixPathDto, edits: WhatIfEdits): PlanInput {
   const rate = edits.labourRateMinor ?? dto.money.labourRateMinor;
   const causeInfo = new Map(dto.causes.map((c) => [c.key, c]));
   const teardownHours = new Map(dto.teardowns.map((t) => [t.key, t.hours]));
-  const addOnInfo = new Map(dto.addOns.map((a) => [a.key, a]));
+  const addOnInfo = new Map((dto.addOnCosts ?? []).map((a) => [a.key, a]));
 
   const causes = dto.input.causes.map((cause): PlanCause => {
     const info = causeInfo.get(cause.key);
@@ -64,7 +64,6 @@ export function whatIfInput(dto: FixPathDto, edits: WhatIfEdits): PlanInput {
     input.escalationCost = dto.escalation ? labourCostMinor(dto.escalation.hours, rate) : dto.input.escalationCost;
   }
   if (dto.input.addOns) {
-    // An add-on the server's path does not reach comes without its hours: it keeps its cost.
     input.addOns = dto.input.addOns.map((addOn) => {
       const info = addOnInfo.get(addOn.key);
       return info ? { ...addOn, cost: info.partCost.minor + labourCostMinor(info.hours, rate) } : addOn;
