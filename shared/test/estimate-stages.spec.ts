@@ -34,6 +34,7 @@ function fixPath(input: PlanInput, opts: { escalation?: string } = {}): FixPathD
     cautions: [FUEL],
     deferTo: "Follow the vehicle maker's procedure, local regulations and licensed practice.",
     addOns: [],
+    addOnCosts: [],
     excluded: [],
     notListed: [],
     indicative: false,

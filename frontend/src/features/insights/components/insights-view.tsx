@@ -34,7 +34,7 @@ function JobsByCode({ data }: { data: InsightsDto }) {
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={rows} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
             <CartesianGrid strokeDasharray="3 3" stroke={palette.grey200} />
-            <XAxis dataKey="code" tick={AXIS} interval={0} />
+            <XAxis dataKey="code" tick={{ ...AXIS, angle: -40, textAnchor: "end" }} interval={0} height={56} />
             <YAxis allowDecimals={false} tick={AXIS} />
             <Tooltip />
             <Legend formatter={legendText} />
@@ -132,7 +132,7 @@ function CostToResolve({ data, locale }: { data: InsightsDto; locale: string }) 
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={c.byCode} margin={{ top: 8, right: 16, bottom: 8, left: 16 }}>
             <CartesianGrid strokeDasharray="3 3" stroke={palette.grey200} />
-            <XAxis dataKey="code" tick={AXIS} interval={0} />
+            <XAxis dataKey="code" tick={{ ...AXIS, angle: -40, textAnchor: "end" }} interval={0} height={56} />
             <YAxis tick={AXIS} tickFormatter={(v: number) => money(v)} width={90} />
             <Tooltip formatter={(v) => money(Number(v))} />
             <Legend formatter={legendText} />
