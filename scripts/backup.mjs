@@ -32,7 +32,9 @@ await db.backup(target, {
   },
 });
 db.close();
-const check = new Database(target, { readonly: true });
+// A single self-contained file: the copy carries the source's WAL mode, so switch it back.
+const check = new Database(target);
+check.pragma('journal_mode = DELETE');
 const integrity = check.pragma('integrity_check', { simple: true });
 check.close();
 console.log(`\nbackup written to ${target} in ${Date.now() - started} ms; integrity_check: ${integrity}`);
